@@ -1,0 +1,35 @@
+/**
+ * Drafts lists as people type them: comma-separated values and inclusive ranges
+ * `from:step:to`, e.g. `0.2:0.1:1.2,1.25`. Values are metres.
+ */
+import { fail } from './errors.js';
+import { LIMITS } from './limits.js';
+
+// Range values are rounded to 12 significant digits so that 0.2 + 0.1 * 1 reads 0.3.
+const tidy = (v: number): number => Number(v.toPrecision(12));
+
+export function parseDraftList(text: string, path: readonly (string | number)[] = ['drafts']): number[] {
+  const out: number[] = [];
+  const parts = text.split(',').map((s) => s.trim());
+  if (text.trim() === '') fail('HYD_DRAFT_LIST', path, 'the drafts list is empty; give values like 0.5,0.6 or a range 0.2:0.1:1.2');
+  parts.forEach((part, k) => {
+    const where = `drafts item ${k + 1} "${part.slice(0, 40)}"`;
+    const bits = part.split(':');
+    const nums = bits.map((b) => (b.trim() === '' ? Number.NaN : Number(b)));
+    if (nums.some((v) => !Number.isFinite(v))) fail('HYD_DRAFT_LIST', [...path, k], `${where}: not a number or a range from:step:to`);
+    if (bits.length === 1) {
+      out.push(nums[0]!);
+    } else if (bits.length === 3) {
+      const [from, step, to] = nums as [number, number, number];
+      if (!(step > 0)) fail('HYD_DRAFT_LIST', [...path, k], `${where}: the step must be greater than zero`);
+      if (to < from) fail('HYD_DRAFT_LIST', [...path, k], `${where}: the range must run upwards (from <= to)`);
+      const count = Math.floor((to - from) / step + 1e-9) + 1;
+      if (out.length + count > LIMITS.maxDrafts) fail('HYD_DRAFT_LIST', [...path, k], `${where}: more than ${LIMITS.maxDrafts} drafts in all`);
+      for (let i = 0; i < count; i++) out.push(tidy(from + i * step));
+    } else {
+      fail('HYD_DRAFT_LIST', [...path, k], `${where}: a range is written from:step:to`);
+    }
+    if (out.length > LIMITS.maxDrafts) fail('HYD_DRAFT_LIST', [...path, k], `more than ${LIMITS.maxDrafts} drafts in all`);
+  });
+  return out;
+}

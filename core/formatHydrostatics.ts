@@ -1,0 +1,84 @@
+/**
+ * The hydrostatic table in its three output forms: JSON, CSV with unit-suffixed
+ * headers, and an aligned text table. Pure: callers write the text where they like.
+ * Every form carries the caution.
+ */
+import Papa from 'papaparse';
+import { CAUTION } from './caution.js';
+import { csvSafeText } from './csvSafe.js';
+import { HYDROSTATIC_FIELDS, type HydrostaticRow } from './hydrostaticFields.js';
+import { perpendiculars, type HullModel } from './hullModel.js';
+
+/** What a result says of the hull it came from. */
+export interface HullSummary {
+  name: string;
+  stations: number;
+  waterlines: number | null;
+  ap: number;
+  fp: number;
+  lbp: number;
+}
+
+export function hullSummary(hull: HullModel): HullSummary {
+  const p = perpendiculars(hull);
+  return { name: hull.name, stations: hull.stations.length, waterlines: hull.waterlines?.length ?? null, ap: p.ap, fp: p.fp, lbp: p.lbp };
+}
+
+export interface HydrostaticResult {
+  hull: HullSummary;
+  density: number;
+  caution: string;
+  rows: HydrostaticRow[];
+}
+
+export function hydrostaticResult(hull: HullModel, density: number, rows: HydrostaticRow[]): HydrostaticResult {
+  return { hull: hullSummary(hull), density, caution: CAUTION, rows };
+}
+
+const UNIT_SLUG: Record<string, string> = { m: 'm', m2: 'm2', m3: 'm3', m4: 'm4', t: 't', 't/cm': 't_per_cm', 't.m/cm': 'tm_per_cm', '-': '' };
+
+/** CSV header of a field: its name with the unit as a suffix (`volume_m3`); none for coefficients. */
+export function csvHeader(key: string, unit: string): string {
+  const slug = UNIT_SLUG[unit] ?? unit.replace(/[^a-z0-9]+/gi, '_');
+  return slug === '' ? key : `${key}_${slug}`;
+}
+
+/** JSON text of a result: NaN (an undefined coefficient) is written as null. */
+export function toJson(value: unknown): string {
+  return JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2);
+}
+
+/** Leading comment lines of every CSV result: the caution, then what the table is of. */
+export function csvPreamble(lines: readonly string[]): string {
+  return [`# ${CAUTION}`, ...lines.map((l) => `# ${l.replace(/[\r\n,]+/g, ' ')}`)].join('\r\n') + '\r\n';
+}
+
+/** The hydrostatic table as CSV: caution line, hull and density lines, header, one row per draft. */
+export function hydrostaticsCsv(result: HydrostaticResult): string {
+  const header = HYDROSTATIC_FIELDS.map((f) => csvHeader(f.key, f.unit));
+  const data = result.rows.map((r) => HYDROSTATIC_FIELDS.map((f) => (Number.isFinite(r[f.key]) ? r[f.key] : '')));
+  const preamble = csvPreamble([`hull: ${csvSafeText(result.hull.name)}`, `density: ${result.density} t/m3`]);
+  return preamble + Papa.unparse({ fields: header, data }, { newline: '\r\n' }) + '\r\n';
+}
+
+/** Decimals shown in the text table for each unit (the JSON and CSV keep full precision). */
+const DECIMALS: Record<string, number> = { m: 3, m2: 2, m3: 3, m4: 1, t: 2, 't/cm': 3, 't.m/cm': 3, '-': 4 };
+
+/** An aligned text table with a units line, for the terminal. */
+export function hydrostaticsText(result: HydrostaticResult): string {
+  const cols = HYDROSTATIC_FIELDS.map((f) => {
+    const cells = result.rows.map((r) => (Number.isFinite(r[f.key]) ? r[f.key].toFixed(DECIMALS[f.unit] ?? 3) : '-'));
+    const unit = f.unit === '-' ? '' : f.unit;
+    const width = Math.max(f.label.length, unit.length, ...cells.map((c) => c.length));
+    return { head: f.label.padStart(width), unit: unit.padStart(width), cells: cells.map((c) => c.padStart(width)) };
+  });
+  const lines = [
+    `${result.hull.name}: ${result.hull.stations} stations, LBP ${result.hull.lbp.toFixed(3)} m, density ${result.density} t/m3`,
+    cols.map((c) => c.head).join('  '),
+    cols.map((c) => c.unit).join('  '),
+    ...result.rows.map((_r, i) => cols.map((c) => c.cells[i]).join('  ')),
+    '',
+    CAUTION,
+  ];
+  return lines.join('\n') + '\n';
+}

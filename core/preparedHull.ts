@@ -1,0 +1,43 @@
+/**
+ * A hull made ready for repeated evaluation: each station's section fitted once, the
+ * Simpson weights along the length computed once, the wetted-surface slope factors
+ * found once. Every draft after that costs one section evaluation per station.
+ * Preparing costs O(stations x points); a table at D drafts then O(D x stations x log points).
+ */
+import { perpendiculars, type HullModel, type Perpendiculars } from './hullModel.js';
+import { Section } from './section.js';
+import { simpsonWeights } from './simpson.js';
+import { applyWettedFactors } from './wettedSurface.js';
+
+export interface PreparedHull {
+  readonly hull: HullModel;
+  readonly perp: Perpendiculars;
+  /** Station positions, m. */
+  readonly x: Float64Array;
+  /** Composite Simpson weights along the length for the stations (core/simpson.ts). */
+  readonly weights: Float64Array;
+  readonly sections: readonly Section[];
+  /** Keel height of each station, m. */
+  readonly keel: Float64Array;
+  /** The lowest keel height of the hull: drafts must lie above it. */
+  readonly lowestKeel: number;
+  /** The lowest deck edge of the hull: drafts may not lie above it. */
+  readonly lowestDeck: number;
+}
+
+export function prepareHull(hull: HullModel): PreparedHull {
+  const x = Float64Array.from(hull.stations, (s) => s.x);
+  const sections = hull.stations.map((s) => new Section(s.points));
+  const keel = Float64Array.from(sections, (s) => s.zKeel);
+  applyWettedFactors(x, sections);
+  return {
+    hull,
+    perp: perpendiculars(hull),
+    x,
+    weights: simpsonWeights(x),
+    sections,
+    keel,
+    lowestKeel: Math.min(...keel),
+    lowestDeck: Math.min(...sections.map((s) => s.zDeck)),
+  };
+}
