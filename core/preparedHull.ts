@@ -26,9 +26,15 @@ export interface PreparedHull {
 }
 
 export function prepareHull(hull: HullModel): PreparedHull {
-  const x = Float64Array.from(hull.stations, (s) => s.x);
-  const sections = hull.stations.map((s) => new Section(s.points));
-  const keel = Float64Array.from(sections, (s) => s.zKeel);
+  const n = hull.stations.length;
+  const x = new Float64Array(n);
+  const keel = new Float64Array(n);
+  const sections = hull.stations.map((s, i) => {
+    const sec = new Section(s.points);
+    x[i] = s.x;
+    keel[i] = sec.zKeel;
+    return sec;
+  });
   applyWettedFactors(x, sections);
   return {
     hull,
@@ -37,7 +43,7 @@ export function prepareHull(hull: HullModel): PreparedHull {
     weights: simpsonWeights(x),
     sections,
     keel,
-    lowestKeel: Math.min(...keel),
-    lowestDeck: Math.min(...sections.map((s) => s.zDeck)),
+    lowestKeel: sections.reduce((m, s) => Math.min(m, s.zKeel), Infinity),
+    lowestDeck: sections.reduce((m, s) => Math.min(m, s.zDeck), Infinity),
   };
 }

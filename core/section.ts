@@ -43,7 +43,7 @@ export interface SectionValues {
   momentYHalf: number;
   /** Wetted girth, both sides, flat of bottom included, m. */
   girth: number;
-  /** Girth weighted by the longitudinal slope factor of the surface (see core/wettedSurface.ts), m. */
+  /** Girth weighted by the longitudinal slope factor of the surface (see core/wettedSurface.ts), read linearly along each piece between its end points, m. */
   wettedGirth: number;
 }
 
@@ -52,7 +52,7 @@ export function emptyValues(): SectionValues {
 }
 
 const KIND_Z = 1; // the piece is y(z): its parameter is z itself
-const QUAD_SUBDIVISIONS = 4; // for the arc length of whole pieces, computed once
+const QUAD_SUBDIVISIONS = 2; // for the arc length of whole pieces, computed once per hull
 
 function horner(c: Float64Array, o: number, u: number): number {
   return c[o]! + u * (c[o + 1]! + u * (c[o + 2]! + u * c[o + 3]!));
@@ -61,26 +61,52 @@ function hornerD(c: Float64Array, o: number, u: number): number {
   return c[o + 1]! + u * (2 * c[o + 2]! + u * 3 * c[o + 3]!);
 }
 
-/** Monomial coefficients (in u = t - t[0]) of the polynomial through (t[k], v[k]), k < n <= 4. */
-function fitCoefficients(t: readonly number[], v: readonly number[], out: Float64Array, o: number): void {
-  const n = t.length;
-  // Newton divided differences.
-  const d = v.slice();
-  for (let j = 1; j < n; j++) {
-    for (let k = n - 1; k >= j; k--) d[k] = (d[k]! - d[k - 1]!) / (t[k]! - t[k - j]!);
-  }
-  // Expand d0 + d1 (u - u0) + d2 (u - u0)(u - u1) + ... with u_k = t_k - t_0.
-  const poly = [0, 0, 0, 0];
-  const basis = [1, 0, 0, 0]; // running product of (u - u_k)
-  for (let j = 0; j < n; j++) {
-    for (let m = 0; m < 4; m++) poly[m]! += d[j]! * basis[m]!;
-    if (j < n - 1) {
-      const uj = t[j]! - t[0]!;
-      for (let m = 3; m >= 1; m--) basis[m] = basis[m - 1]! - uj * basis[m]!;
-      basis[0] = -uj * basis[0]!;
+/**
+ * Monomial coefficients (in u = t - t0) of the polynomial through the n <= 4 points
+ * (t[from + k], v[from + k]), appended to `out` as four numbers (zeros above degree n - 1).
+ */
+function fitCoefficients(t: ArrayLike<number>, v: ArrayLike<number>, from: number, n: number, out: number[]): void {
+  // Newton divided differences, then expansion of d0 + d1 (u - u0) + d2 (u - u0)(u - u1) + ...
+  const t0 = t[from]!;
+  const d0 = v[from]!;
+  let d1 = 0;
+  let d2 = 0;
+  let d3 = 0;
+  const u1 = n > 1 ? t[from + 1]! - t0 : 0;
+  const u2 = n > 2 ? t[from + 2]! - t0 : 0;
+  const u3 = n > 3 ? t[from + 3]! - t0 : 0;
+  if (n > 1) {
+    const v1 = v[from + 1]!;
+    const f01 = (v1 - d0) / u1;
+    d1 = f01;
+    if (n > 2) {
+      const v2 = v[from + 2]!;
+      const f12 = (v2 - v1) / (u2 - u1);
+      const f012 = (f12 - f01) / u2;
+      d2 = f012;
+      if (n > 3) {
+        const v3 = v[from + 3]!;
+        const f23 = (v3 - v2) / (u3 - u2);
+        const f123 = (f23 - f12) / (u3 - u1);
+        d3 = (f123 - f012) / u3;
+      }
     }
   }
-  for (let m = 0; m < 4; m++) out[o + m] = poly[m]!;
+  // p(u) = d0 + d1 u + d2 u (u - u1) + d3 u (u - u1)(u - u2)
+  out.push(d0, d1 - d2 * u1 + d3 * u1 * u2, d2 - d3 * (u1 + u2), d3);
+}
+
+/** Whether the cubic or parabola through a panel's z values never turns back. */
+function monotoneZ(t: Float64Array, zs: Float64Array, i0: number, size: number): boolean {
+  const c: number[] = [];
+  fitCoefficients(t, zs, i0, size, c);
+  const span = t[i0 + size - 1]! - t[i0]!;
+  const samples = 32;
+  for (let k = 0; k <= samples; k++) {
+    const u = (span * k) / samples;
+    if (c[1]! + u * (2 * c[2]! + u * 3 * c[3]!) < -1e-12) return false;
+  }
+  return true;
 }
 
 export class Section {
@@ -100,13 +126,12 @@ export class Section {
   private readonly cz: Float64Array;
   private readonly firstPoint: Int32Array; // index of each piece's first point
   private readonly pointCount: Int32Array; // points in each piece
-  private readonly pointT: Float64Array; // parameter of each point within its piece, from the piece start
   private readonly factor: Float64Array; // wetted-surface slope factor at each point
   private readonly cumArea: Float64Array; // at piece starts, half-section integrals from the keel
   private readonly cumMz: Float64Array;
   private readonly cumMy: Float64Array;
   private readonly cumGirth: Float64Array;
-  private cumWetted: Float64Array;
+  private readonly cumWetted: Float64Array;
   private readonly ys: Float64Array;
   private readonly zs: Float64Array;
   private readonly slope: Float64Array; // dz/ds at each point, from its neighbours in the run
@@ -114,94 +139,83 @@ export class Section {
   constructor(points: readonly SectionPointInput[]) {
     const n = points.length;
     if (n < 2) throw new RangeError('a section needs at least two points');
-    this.ys = Float64Array.from(points, (p) => p.y);
-    this.zs = Float64Array.from(points, (p) => p.z);
+    // Plain loops: typed-array `from` with a map function is slow in V8, and this runs per station.
+    this.ys = new Float64Array(n);
+    this.zs = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      this.ys[k] = points[k]!.y;
+      this.zs[k] = points[k]!.z;
+    }
     this.zKeel = this.zs[0]!;
     this.zDeck = this.zs[n - 1]!;
     this.yKeel = this.ys[0]!;
 
-    const pieces: { first: number; count: number; kind: number; span: number; cy: number[]; cz: number[]; t: number[] }[] = [];
     const corners: number[] = [0];
     for (let k = 1; k < n - 1; k++) if (points[k]!.knuckle === true) corners.push(k);
     corners.push(n - 1);
     this.slope = new Float64Array(n);
+    const ys = this.ys;
+    const zs = this.zs;
+    // Pieces are gathered in plain arrays, then packed into typed arrays once.
+    const first: number[] = [];
+    const size: number[] = [];
+    const kinds: number[] = [];
+    const spans: number[] = [];
+    const coefY: number[] = [];
+    const coefZ: number[] = [];
+    const t = new Float64Array(n); // parameter of each point along its run
 
     for (let r = 0; r + 1 < corners.length; r++) {
       const s = corners[r]!;
       const e = corners[r + 1]!;
       let zStrict = true;
-      for (let k = s + 1; k <= e; k++) if (!(this.zs[k]! > this.zs[k - 1]!)) zStrict = false;
+      for (let k = s + 1; k <= e; k++) if (!(zs[k]! > zs[k - 1]!)) zStrict = false;
       // Parameter along the run: z itself, or the chord length.
-      const t: number[] = [0];
+      t[s] = zStrict ? zs[s]! : 0;
       for (let k = s + 1; k <= e; k++) {
-        const dz = this.zs[k]! - this.zs[k - 1]!;
-        const dy = this.ys[k]! - this.ys[k - 1]!;
-        t.push(t[t.length - 1]! + (zStrict ? dz : Math.hypot(dy, dz)));
+        t[k] = zStrict ? zs[k]! : t[k - 1]! + Math.hypot(ys[k]! - ys[k - 1]!, zs[k]! - zs[k - 1]!);
       }
       for (let k = s; k <= e; k++) {
         const a = Math.max(s, k - 1);
         const b = Math.min(e, k + 1);
-        const dz = this.zs[b]! - this.zs[a]!;
-        const len = Math.hypot(this.ys[b]! - this.ys[a]!, dz);
+        const dz = zs[b]! - zs[a]!;
+        const len = Math.hypot(ys[b]! - ys[a]!, dz);
         this.slope[k] = len > 0 ? dz / len : 1;
       }
-      const m = e - s + 1;
       const addPiece = (i0: number, count: number): void => {
-        const tt: number[] = [];
-        const yy: number[] = [];
-        const zz: number[] = [];
-        for (let k = 0; k < count; k++) {
-          tt.push(t[i0 - s + k]!);
-          yy.push(this.ys[i0 + k]!);
-          zz.push(this.zs[i0 + k]!);
-        }
-        const cy = new Float64Array(4);
-        const cz = new Float64Array(4);
-        fitCoefficients(tt, yy, cy, 0);
-        if (zStrict) cz.set([zz[0]!, 1, 0, 0]);
-        else fitCoefficients(tt, zz, cz, 0);
-        pieces.push({
-          first: i0,
-          count,
-          kind: zStrict ? KIND_Z : 0,
-          span: tt[count - 1]! - tt[0]!,
-          cy: Array.from(cy),
-          cz: Array.from(cz),
-          t: tt.map((v) => v - tt[0]!),
-        });
+        first.push(i0);
+        size.push(count);
+        kinds.push(zStrict ? KIND_Z : 0);
+        spans.push(t[i0 + count - 1]! - t[i0]!);
+        fitCoefficients(t, ys, i0, count, coefY);
+        if (zStrict) coefZ.push(zs[i0]!, 1, 0, 0);
+        else fitCoefficients(t, zs, i0, count, coefZ);
       };
+      const m = e - s + 1;
       const panels = m === 2 ? [{ start: 0, size: 2 as const }] : simpsonPanels(m);
       for (const p of panels) {
         const i0 = s + p.start;
-        if (!zStrict && p.size > 2 && !this.monotoneZ(t, s, i0, p.size)) {
+        if (!zStrict && p.size > 2 && !monotoneZ(t, zs, i0, p.size)) {
           for (let k = 0; k + 1 < p.size; k++) addPiece(i0 + k, 2);
         } else addPiece(i0, p.size);
       }
     }
 
-    const count = pieces.length;
+    const count = first.length;
     this.pieceCount = count;
-    this.span = new Float64Array(count);
+    this.span = new Float64Array(spans);
     this.zA = new Float64Array(count);
     this.zB = new Float64Array(count);
-    this.kind = new Uint8Array(count);
-    this.cy = new Float64Array(4 * count);
-    this.cz = new Float64Array(4 * count);
-    this.firstPoint = new Int32Array(count);
-    this.pointCount = new Int32Array(count);
-    this.pointT = new Float64Array(4 * count);
+    for (let i = 0; i < count; i++) {
+      this.zA[i] = zs[first[i]!]!;
+      this.zB[i] = zs[first[i]! + size[i]! - 1]!;
+    }
+    this.kind = new Uint8Array(kinds);
+    this.cy = new Float64Array(coefY);
+    this.cz = new Float64Array(coefZ);
+    this.firstPoint = new Int32Array(first);
+    this.pointCount = new Int32Array(size);
     this.factor = new Float64Array(n).fill(1);
-    pieces.forEach((p, i) => {
-      this.span[i] = p.span;
-      this.zA[i] = this.zs[p.first]!;
-      this.zB[i] = this.zs[p.first + p.count - 1]!;
-      this.kind[i] = p.kind;
-      this.cy.set(p.cy, 4 * i);
-      this.cz.set(p.cz, 4 * i);
-      this.firstPoint[i] = p.first;
-      this.pointCount[i] = p.count;
-      this.pointT.set(p.t, 4 * i);
-    });
     this.cumArea = new Float64Array(count + 1);
     this.cumMz = new Float64Array(count + 1);
     this.cumMy = new Float64Array(count + 1);
@@ -216,22 +230,6 @@ export class Section {
       this.cumGirth[i + 1] = this.cumGirth[i]! + part.girth;
       this.cumWetted[i + 1] = this.cumWetted[i]! + part.wettedGirth;
     }
-  }
-
-  /** Whether the cubic or parabola through a panel's z values never turns back. */
-  private monotoneZ(t: readonly number[], s: number, i0: number, size: number): boolean {
-    const tt: number[] = [];
-    const zz: number[] = [];
-    for (let k = 0; k < size; k++) {
-      tt.push(t[i0 - s + k]!);
-      zz.push(this.zs[i0 + k]!);
-    }
-    const c = new Float64Array(4);
-    fitCoefficients(tt, zz, c, 0);
-    const span = tt[size - 1]! - tt[0]!;
-    const samples = 32;
-    for (let k = 0; k <= samples; k++) if (hornerD(c, 0, (span * k) / samples) < -1e-12) return false;
-    return true;
   }
 
   /** The points of the section, as given (m). */
@@ -254,12 +252,11 @@ export class Section {
   setWettedFactors(factors: ArrayLike<number>): void {
     this.factor.set(factors);
     const part = emptyValues();
-    const cum = new Float64Array(this.pieceCount + 1);
+    const cum = this.cumWetted;
     for (let i = 0; i < this.pieceCount; i++) {
       this.partial(i, this.span[i]!, part, QUAD_SUBDIVISIONS);
       cum[i + 1] = cum[i]! + part.wettedGirth;
     }
-    this.cumWetted = cum;
   }
 
   /** Index of the piece in which height z lies: the first whose top is above z. */
@@ -297,28 +294,22 @@ export class Section {
     return u;
   }
 
-  /** The wetted-surface factor at parameter u of piece i, read linearly between its points. */
-  private factorAt(i: number, u: number): number {
-    const first = this.firstPoint[i]!;
-    const count = this.pointCount[i]!;
-    const o = 4 * i;
-    for (let k = 1; k < count; k++) {
-      const tb = this.pointT[o + k]!;
-      if (u <= tb || k === count - 1) {
-        const ta = this.pointT[o + k - 1]!;
-        const w = tb > ta ? (u - ta) / (tb - ta) : 0;
-        return this.factor[first + k - 1]! * (1 - w) + this.factor[first + k]! * w;
-      }
-    }
-    return this.factor[first]!;
-  }
-
   /**
-   * Half-section integrals over piece i from its start to parameter u, into `out`
-   * (area and moments of one side; girth of one side).
+   * Half-section integrals over piece i from its start to parameter uEnd, into `out`
+   * (area and moments of one side; girth of one side). The slope factor is read
+   * linearly between the piece's end points. This is the inner loop of every table:
+   * coefficients are loaded once and nothing is allocated.
    */
   private partial(i: number, uEnd: number, out: SectionValues, subdivisions = 1): void {
     const o = 4 * i;
+    const cy = this.cy;
+    const cz = this.cz;
+    const y0 = cy[o]!, y1 = cy[o + 1]!, y2 = cy[o + 2]!, y3 = cy[o + 3]!;
+    const z0 = cz[o]!, z1 = cz[o + 1]!, z2 = cz[o + 2]!, z3 = cz[o + 3]!;
+    const span = this.span[i]!;
+    const fA = this.factor[this.firstPoint[i]!]!;
+    const fB = this.factor[this.firstPoint[i]! + this.pointCount[i]! - 1]!;
+    const fSlope = span > 0 ? (fB - fA) / span : 0;
     let area = 0;
     let mz = 0;
     let my = 0;
@@ -329,16 +320,17 @@ export class Section {
       for (let g = 0; g < 5; g++) {
         const u = h * (sd + GL5_T[g]!);
         const w = GL5_W[g]! * h;
-        const y = horner(this.cy, o, u);
-        const z = horner(this.cz, o, u);
-        const dy = hornerD(this.cy, o, u);
-        const dz = hornerD(this.cz, o, u);
-        const ds = Math.sqrt(dy * dy + dz * dz);
-        area += w * y * dz;
-        mz += w * y * z * dz;
-        my += w * 0.5 * y * y * dz;
-        girth += w * ds;
-        wetted += w * ds * this.factorAt(i, u);
+        const y = y0 + u * (y1 + u * (y2 + u * y3));
+        const z = z0 + u * (z1 + u * (z2 + u * z3));
+        const dy = y1 + u * (2 * y2 + u * 3 * y3);
+        const dz = z1 + u * (2 * z2 + u * 3 * z3);
+        const ds = w * Math.sqrt(dy * dy + dz * dz);
+        const a = w * y * dz;
+        area += a;
+        mz += a * z;
+        my += 0.5 * a * y;
+        girth += ds;
+        wetted += ds * (fA + fSlope * u);
       }
     }
     out.area = area;
