@@ -56,6 +56,23 @@ function addPanelWeights(x: ArrayLike<number>, start: number, size: number, out:
   const a = x[start]!;
   const b = x[start + size - 1]!;
   const span = b - a;
+  // Trapezoid and first-rule panels in closed form, so that equal intervals give the
+  // trade's h/2, h/2 and h/3, 4h/3, h/3 to the last digit (the quadrature below leaves
+  // ulps of rounding, which would show as multipliers like 0.9999999999999978).
+  if (size === 2) {
+    out[start]! += span / 2;
+    out[start + 1]! += span / 2;
+    return;
+  }
+  if (size === 3) {
+    // Integrals of the Lagrange basis over [x0, x2], intervals h1 and h2.
+    const h1 = x[start + 1]! - a;
+    const h2 = b - x[start + 1]!;
+    out[start]! += (span * (2 * h1 - h2)) / (6 * h1);
+    out[start + 1]! += (span * span * span) / (6 * h1 * h2);
+    out[start + 2]! += (span * (2 * h2 - h1)) / (6 * h2);
+    return;
+  }
   for (let g = 0; g < 3; g++) {
     const t = a + GL3_T[g]! * span;
     const wg = GL3_W[g]! * span;
@@ -156,18 +173,24 @@ export function simpsonMultipliers(x: ArrayLike<number>): { spacing: number; mul
   return { spacing, multipliers };
 }
 
-/** The most common interval of `x` (to 1e-9 relative); the largest when all differ. */
+/**
+ * The most common interval of `x` (intervals equal to 9 significant figures count as
+ * one); the largest when all differ. The interval returned is one of those actually
+ * found, not its 9-figure rounding, so multipliers on equal spacing come out whole.
+ */
 export function commonSpacing(x: ArrayLike<number>): number {
   const counts = new Map<number, number>();
   let best = 0;
+  let bestKey = 0;
   let bestCount = 0;
   for (let k = 1; k < x.length; k++) {
     const d = x[k]! - x[k - 1]!;
     const key = Number(d.toPrecision(9));
     const c = (counts.get(key) ?? 0) + 1;
     counts.set(key, c);
-    if (c > bestCount || (c === bestCount && key > best)) {
-      best = key;
+    if (c > bestCount || (c === bestCount && key > bestKey)) {
+      best = d;
+      bestKey = key;
       bestCount = c;
     }
   }
