@@ -1,0 +1,42 @@
+/**
+ * The shape of one command of the command line. Each command is a file under
+ * cli/commands/ and is listed once in cli/commands/index.ts; cli/main.ts parses the
+ * options a command declares, prints its help and maps what it returns or throws to an
+ * exit code.
+ */
+import type { CliIo } from './io.js';
+
+export interface OptionSpec {
+  readonly type: 'string' | 'boolean';
+  readonly short?: string;
+  /** A string option the command cannot run without. */
+  readonly required?: boolean;
+  /** Shown when a string option has no value, e.g. `0.2:0.1:1.2`. */
+  readonly example?: string;
+}
+
+/** Parsed arguments: each option once at most, and the positionals in order. */
+export interface CommandArgs {
+  readonly values: Readonly<Record<string, string | boolean | undefined>>;
+  readonly positionals: readonly string[];
+}
+
+export interface Command {
+  /** The word typed after `halfbreadth`. */
+  readonly name: string;
+  /** One line for the list of commands. */
+  readonly summary: string;
+  /** What follows `halfbreadth` in the usage line, e.g. `hydrostatics <file|-> --drafts <list> [options]`. */
+  readonly synopsis: string;
+  /** The rest of the command's help: what it does, its options, its output. */
+  readonly help: string;
+  /** Options besides --help, which every command has. */
+  readonly options: Readonly<Record<string, OptionSpec>>;
+  /** Names of the positional arguments, all required, in order, e.g. `<file|->`. */
+  readonly positionals: readonly string[];
+  /** Run with arguments already parsed and counted; resolves to the exit code. Throws HalfbreadthError for bad input. */
+  run(args: CommandArgs, io: CliIo): Promise<number>;
+}
+
+/** Exit codes of the command line. */
+export const EXIT = { ok: 0, fault: 1, badInput: 2 } as const;

@@ -1,0 +1,154 @@
+/**
+ * `halfbreadth check <file|->`: reads and validates an offsets file and prints either
+ * its particulars (what the file holds, and the drafts a table of it may use) or every
+ * error found, each with its line and column.
+ */
+import { CAUTION } from '../../core/caution.js';
+import { HalfbreadthError, type Issue } from '../../core/errors.js';
+import type { HullModel } from '../../core/hullModel.js';
+import { prepareHull } from '../../core/preparedHull.js';
+import { readOffsetsCsv, type ReadResult } from '../../core/readOffsets.js';
+import { toJson } from '../../core/formatHydrostatics.js';
+import type { Command, CommandArgs } from '../command.js';
+import { EXIT } from '../command.js';
+import { chooseFormat, readInput, type CliIo } from '../io.js';
+import { issueLines } from '../printIssues.js';
+
+/** A remark on a sound hull that a person should look at, such as an offset that is not fair. */
+export interface Warning {
+  readonly code: string;
+  readonly path: readonly (string | number)[];
+  readonly message: string;
+}
+
+/**
+ * The checks that find warnings in a hull that reads without error. None yet: the
+ * fairness check of the offsets joins this list when the core has it, and its findings
+ * then show in every form of `check` without further change here.
+ */
+export const WARNING_CHECKS: readonly ((hull: HullModel) => readonly Warning[])[] = [];
+
+/** What `check` reports of a sound file. Lengths in metres, whatever the file's units. */
+export interface Particulars {
+  name: string;
+  form: ReadResult['form'];
+  units: ReadResult['units'];
+  stations: number;
+  /** Tabulated waterlines of a grid; null for the points form. */
+  waterlines: number | null;
+  points: number;
+  ap: number;
+  fp: number;
+  lbp: number;
+  amidships: number;
+  /** Keel heights above the baseline over the stations, m. */
+  keel: { lowest: number; highest: number };
+  /** Deck-edge heights above the baseline over the stations, m. */
+  deckEdge: { lowest: number; highest: number };
+  /** A table may use drafts above `above` and up to `atMost`, m (above the lowest keel, not above the lowest deck edge). */
+  drafts: { above: number; atMost: number };
+}
+
+export function particulars(read: ReadResult): Particulars {
+  const { hull } = read;
+  const p = prepareHull(hull);
+  const decks = p.sections.map((s) => s.zDeck);
+  return {
+    name: hull.name,
+    form: read.form,
+    units: read.units,
+    stations: hull.stations.length,
+    waterlines: hull.waterlines?.length ?? null,
+    points: hull.stations.reduce((n, s) => n + s.points.length, 0),
+    ap: p.perp.ap,
+    fp: p.perp.fp,
+    lbp: p.perp.lbp,
+    amidships: p.perp.xm,
+    keel: { lowest: p.lowestKeel, highest: Math.max(...p.keel) },
+    deckEdge: { lowest: p.lowestDeck, highest: Math.max(...decks) },
+    drafts: { above: p.lowestKeel, atMost: p.lowestDeck },
+  };
+}
+
+/** The JSON report: `{ errors, warnings, particulars, caution }`; particulars null when there are errors. */
+export interface CheckReport {
+  errors: readonly Issue[];
+  warnings: readonly Warning[];
+  particulars: Particulars | null;
+  caution: string;
+}
+
+const m = (v: number): string => `${v.toFixed(3)} m`;
+
+/** The particulars as aligned lines for the terminal. */
+export function particularsText(label: string, p: Particulars): string {
+  const rows: [string, string][] = [
+    ['name', p.name],
+    ['form', p.form === 'grid' ? 'grid (table of offsets)' : 'points (sections as point lists)'],
+    ['units in file', p.units],
+    ['stations', String(p.stations)],
+    ['waterlines', p.waterlines === null ? '-' : String(p.waterlines)],
+    ['points', String(p.points)],
+    ['ap', m(p.ap)],
+    ['fp', m(p.fp)],
+    ['LBP', m(p.lbp)],
+    ['amidships', m(p.amidships)],
+    ['keel', `${m(p.keel.lowest)} lowest, ${m(p.keel.highest)} highest`],
+    ['deck edge', `${m(p.deckEdge.lowest)} lowest, ${m(p.deckEdge.highest)} highest`],
+    ['drafts', `above ${m(p.drafts.above)}, up to ${m(p.drafts.atMost)}`],
+  ];
+  const w = Math.max(...rows.map(([k]) => k.length));
+  return [`${label}: reads without error (lengths in metres)`, ...rows.map(([k, v]) => `  ${k.padEnd(w)}  ${v}`), '', CAUTION].join('\n') + '\n';
+}
+
+export const check: Command = {
+  name: 'check',
+  summary: 'validate an offsets file and print its particulars, or all its errors',
+  synopsis: 'check <file|-> [--format table|json]',
+  positionals: ['<file|->'],
+  options: { format: { type: 'string', example: '--format json' } },
+  help: `Reads an offsets file and reports either what it holds (name, form, units,
+stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge heights,
+and the drafts a hydrostatic table of it may use) or every error found, each with
+its line and column.
+
+Arguments:
+  <file|->            offsets CSV, grid or points form; - reads standard input
+
+Options:
+  --format <form>     table or json (default table)
+  -h, --help          this help
+
+Forms:
+  table   the particulars as lines on stdout; errors and warnings on stderr
+  json    { "errors": [...], "warnings": [...], "particulars": {...} | null,
+          "caution": "..." } on stdout; each error is { code, path, message };
+          the errors are also printed on stderr
+
+Exit status: 0 when the file reads without error, 2 when it has errors.`,
+  async run(args: CommandArgs, io: CliIo): Promise<number> {
+    const requested = args.values['format'];
+    const format = chooseFormat(typeof requested === 'string' ? requested : undefined, ['table', 'json'], 'table', io.stdout);
+    const input = await readInput(args.positionals[0]!, io);
+    const program = 'halfbreadth check';
+    let read: ReadResult | undefined;
+    let errors: readonly Issue[] = [];
+    try {
+      read = readOffsetsCsv(input.text);
+    } catch (e) {
+      if (!(e instanceof HalfbreadthError)) throw e;
+      errors = e.issues;
+    }
+    const warnings = read === undefined ? [] : WARNING_CHECKS.flatMap((f) => f(read.hull));
+    const found = read === undefined ? null : particulars(read);
+    if (errors.length > 0) io.stderr.write(issueLines(errors, input.label, program).join('\n') + '\n');
+    if (warnings.length > 0) io.stderr.write(warnings.map((w) => `${input.label}: warning: ${w.message}`).join('\n') + '\n');
+    if (format === 'json') {
+      const report: CheckReport = { errors, warnings, particulars: found, caution: CAUTION };
+      io.stdout.write(toJson(report) + '\n');
+    } else if (found !== null) {
+      io.stdout.write(particularsText(input.label, found));
+    }
+    return errors.length > 0 ? EXIT.badInput : EXIT.ok;
+  },
+};

@@ -1,0 +1,87 @@
+/**
+ * `halfbreadth hydrostatics <file|-> --drafts <list>`: the upright hydrostatic table of
+ * an offsets file at a list of drafts, as a text table, CSV or JSON. Thin: the reading,
+ * the figures and the three forms all come from the core.
+ */
+import { HalfbreadthError, issue, type Issue } from '../../core/errors.js';
+import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/constants.js';
+import { checkDensity } from '../../core/density.js';
+import { parseDraftList } from '../../core/draftList.js';
+import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/formatHydrostatics.js';
+import { hydrostaticTable } from '../../core/hydrostatics.js';
+import { prepareHull } from '../../core/preparedHull.js';
+import { readOffsetsCsv } from '../../core/readOffsets.js';
+import { attempt, attemptAsync, throwIfAny } from '../collect.js';
+import type { Command, CommandArgs } from '../command.js';
+import { EXIT } from '../command.js';
+import { chooseFormat, readInput, type CliIo } from '../io.js';
+
+const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
+
+/** The density from --density or --fresh (sea water when neither), checked against DENSITY_RANGE. */
+export function densityOption(values: CommandArgs['values']): number {
+  const text = str(values['density']);
+  if (values['fresh'] === true) {
+    if (text !== undefined) {
+      throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['--fresh'], '--fresh and --density both set the density; give one of them')]);
+    }
+    return FRESH_WATER_DENSITY;
+  }
+  if (text === undefined) return SEA_WATER_DENSITY;
+  const value = text.trim() === '' ? Number.NaN : Number(text);
+  return checkDensity(value, ['density'], text);
+}
+
+export const hydrostatics: Command = {
+  name: 'hydrostatics',
+  summary: 'the upright hydrostatic table of a hull at a list of drafts',
+  synopsis: 'hydrostatics <file|-> --drafts <list> [--density <t/m3> | --fresh] [--format table|csv|json]',
+  positionals: ['<file|->'],
+  options: {
+    drafts: { type: 'string', required: true, example: '--drafts 0.2:0.1:1.2,1.25' },
+    density: { type: 'string', example: '--density 1.025' },
+    fresh: { type: 'boolean' },
+    format: { type: 'string', example: '--format csv' },
+  },
+  help: `The upright, level hydrostatic particulars of the hull in an offsets file at each
+draft of a list: volume, displacement, LCB, VCB (KB), waterplane area, LCF, IT, IL,
+BMt, BMl, KMt, KMl, TPC, MCT1cm, LWL, BWL, Am, Cb, Cm, Cp, Cwp and wetted surface.
+
+Arguments:
+  <file|->            offsets CSV, grid or points form; - reads standard input
+
+Options:
+  --drafts <list>     drafts in metres above the baseline, comma-separated values
+                      and ranges from:step:to, e.g. 0.2:0.1:1.2,1.25 (required)
+  --density <t/m3>    water density, 0.9 to 1.1 (default 1.025, sea water)
+  --fresh             fresh water: density 1.000
+  --format <form>     table, csv or json (default: table on a terminal, csv when
+                      the output is piped or redirected to a file)
+  -h, --help          this help
+
+Forms:
+  table   aligned columns under a units line, for reading
+  csv     one row per draft; headers carry their units (volume_m3, tpc_t_per_cm);
+          leading # lines give the caution, the hull and the density
+  json    { "hull": {...}, "density": ..., "caution": "...", "rows": [...] },
+          one row object per draft; a coefficient that is undefined is null
+
+Example:
+  halfbreadth hydrostatics offsets-demo/workboat.csv --drafts 0.5:0.25:2 > workboat.csv`,
+  async run(args: CommandArgs, io: CliIo): Promise<number> {
+    const issues: Issue[] = [];
+    const { values } = args;
+    const format = attempt(() => chooseFormat(str(values['format']), ['table', 'csv', 'json'], 'csv', io.stdout), issues);
+    const drafts = attempt(() => parseDraftList(str(values['drafts']) ?? ''), issues);
+    const density = attempt(() => densityOption(values), issues);
+    const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
+    const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
+    throwIfAny(issues);
+    const { hull } = read!;
+    const rows = hydrostaticTable(prepareHull(hull), drafts!, density!);
+    const result = hydrostaticResult(hull, density!, rows);
+    const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : hydrostaticsText(result);
+    io.stdout.write(text);
+    return EXIT.ok;
+  },
+};

@@ -1,0 +1,13 @@
+/**
+ * The commands of the command line, in the order the help lists them. A new command is
+ * a file beside this one exporting a Command (cli/command.ts), added to this list.
+ */
+import type { Command } from '../command.js';
+import { check } from './check.js';
+import { hydrostatics } from './hydrostatics.js';
+
+export const COMMANDS: readonly Command[] = [hydrostatics, check];
+
+export function findCommand(name: string): Command | undefined {
+  return COMMANDS.find((c) => c.name === name);
+}
