@@ -63,7 +63,10 @@ export function checkHull(hull: RuleHull): Issue[] {
   const last = stations[stations.length - 1];
   const ap = hull.ap ?? first?.x;
   const fp = hull.fp ?? last?.x;
-  if (ap !== undefined && fp !== undefined && !(fp > ap)) {
+  // With neither perpendicular given, fp > ap is the end stations' x order, which the
+  // station rules above already report; saying it again would only repeat them.
+  const given = hull.ap !== undefined || hull.fp !== undefined;
+  if (given && ap !== undefined && fp !== undefined && !(fp > ap)) {
     found.push(issue('HYD_PERPENDICULARS', [hull.fp !== undefined ? 'fp' : 'ap'], `fp (x = ${fmt(fp)} m) must lie forward of ap (x = ${fmt(ap)} m)`));
   }
   return found;
