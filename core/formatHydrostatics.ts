@@ -48,9 +48,14 @@ export function toJson(value: unknown): string {
   return JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2);
 }
 
-/** Leading comment lines of every CSV result: the caution, then what the table is of. */
+/**
+ * Leading comment lines of every CSV result: the caution, then what the table is of.
+ * Line breaks and the separators spreadsheets split on when they import (comma,
+ * semicolon where the decimal mark is a comma, tab) become spaces, so each line stays
+ * one cell led by `#` and no text of the input can start a cell of its own.
+ */
 export function csvPreamble(lines: readonly string[]): string {
-  return [`# ${CAUTION}`, ...lines.map((l) => `# ${l.replace(/[\r\n,]+/g, ' ')}`)].join('\r\n') + '\r\n';
+  return [`# ${CAUTION}`, ...lines.map((l) => `# ${l.replace(/[\r\n,;\t]+/g, ' ')}`)].join('\r\n') + '\r\n';
 }
 
 /** The hydrostatic table as CSV: caution line, hull and density lines, header, one row per draft. */
