@@ -2,7 +2,8 @@
  * Reading a hull model given as JSON (already parsed): the schema of core/hullModel.ts,
  * geometric rules included, with every issue thrown at once. Each issue keeps the zod
  * path into the model (`["stations", 2, "points", 0, "y"]`); a broken geometric rule
- * keeps its own code, other mismatches are HYD_MODEL_INVALID.
+ * keeps its own code, a list longer than its limit (core/limits.ts) is HYD_TOO_LARGE,
+ * other mismatches are HYD_MODEL_INVALID.
  */
 import { ERROR_CODES, HalfbreadthError, issue, type ErrorCode, type Issue } from './errors.js';
 import { HullModelSchema, type HullModel } from './hullModel.js';
@@ -23,7 +24,8 @@ export function readHullJson(value: unknown): HullModel {
   const issues: Issue[] = r.error.issues.map((z) => {
     const path = z.path.map((p) => (typeof p === 'symbol' ? String(p) : p));
     const params = (z as { params?: { code?: unknown } }).params;
-    const code = isCode(params?.code) ? params.code : 'HYD_MODEL_INVALID';
+    const tooMany = z.code === 'too_big' && z.origin === 'array';
+    const code = isCode(params?.code) ? params.code : tooMany ? 'HYD_TOO_LARGE' : 'HYD_MODEL_INVALID';
     return issue(code, path, `${pathText(path)}: ${z.message}`);
   });
   throw new HalfbreadthError(issues);

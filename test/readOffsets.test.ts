@@ -610,6 +610,12 @@ describe('hull models given as JSON', () => {
     expect(jsonIssues(null)[0]!.message).toMatch(/^the hull: /);
   });
 
+  test('a list longer than its limit is too large, with its path', () => {
+    const many = { ...sound, waterlines: Array.from({ length: LIMITS.maxWaterlines + 1 }, (_, k) => k) };
+    const issues = jsonIssues(many);
+    expect(issues.map((i) => [i.code, i.path])).toEqual([['HYD_TOO_LARGE', ['waterlines']]]);
+  });
+
   test('a broken geometric rule keeps its own code and the model path', () => {
     const bad = structuredClone(sound);
     bad.stations[1]!.points[1]!.y = -0.5;
