@@ -1,0 +1,64 @@
+/**
+ * The Fastify application. `buildApp()` assembles it and never listens (tests use
+ * `inject`; server/main.ts listens).
+ */
+import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import type { ServiceContext } from './context.js';
+import { buildOpenapi } from './openapi.js';
+import { OneLinePerRequest } from './plugins/requestLog.js';
+import { registerUploadBody } from './plugins/uploadBody.js';
+import { PreparedCache } from './preparedCache.js';
+import { registerProblemHandler } from './problem.js';
+import { ALL_ROUTES } from './routes/index.js';
+import { registerRoutes } from './routes/routeSpec.js';
+import { SERVICE_LIMITS } from './serviceLimits.js';
+import { HullStore } from './store/hullStore.js';
+
+export interface AppOptions {
+  /** The hull store; when left out, one is opened in `dataDir`. */
+  readonly store?: HullStore;
+  /** Directory of the store's file, or ':memory:' (the default, for tests). */
+  readonly dataDir?: string;
+  /** Fastify's logger option: false (the default) for none, or pino options. */
+  readonly logger?: FastifyServerOptions['logger'];
+}
+
+declare module 'fastify' {
+  interface FastifyInstance {
+    /** The store and cache the routes use (for tests and for main.ts's demo preload). */
+    readonly halfbreadth: { readonly store: HullStore; readonly cache: PreparedCache };
+  }
+}
+
+export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
+  const ownStore = options.store === undefined;
+  const store = options.store ?? HullStore.open(options.dataDir ?? ':memory:');
+  const app = Fastify({
+    logger: options.logger ?? false,
+    logController: new OneLinePerRequest(),
+    bodyLimit: SERVICE_LIMITS.bodyLimit,
+    requestTimeout: SERVICE_LIMITS.requestTimeout,
+    connectionTimeout: SERVICE_LIMITS.connectionTimeout,
+    keepAliveTimeout: SERVICE_LIMITS.keepAliveTimeout,
+    routerOptions: { maxParamLength: 200 },
+    // Closing stops idle keep-alive sockets at once and lets requests in flight finish.
+    forceCloseConnections: 'idle',
+    return503OnClosing: true,
+    exposeHeadRoutes: false,
+  });
+  const cache = new PreparedCache(store, SERVICE_LIMITS.preparedCacheSize);
+  const ctx: ServiceContext = { store, cache, openapi: buildOpenapi(ALL_ROUTES) };
+
+  registerProblemHandler(app);
+  registerUploadBody(app);
+  app.addHook('onSend', async (_req, reply, payload) => {
+    reply.header('x-content-type-options', 'nosniff');
+    return payload;
+  });
+  registerRoutes(app, ALL_ROUTES, ctx);
+  if (ownStore) app.addHook('onClose', async () => store.close());
+
+  app.decorate('halfbreadth', { store, cache });
+  await app.ready();
+  return app;
+}

@@ -1,0 +1,67 @@
+/**
+ * Checking offsets: whether they make a sound hull, every issue if not, and what the
+ * hull is (stations, perpendiculars, the range of drafts it can be floated at). Offsets
+ * that break a rule are an answer here (valid: false), not a failure.
+ */
+import { z } from 'zod';
+import { CAUTION } from '../../core/caution.js';
+import type { HalfbreadthError } from '../../core/errors.js';
+import { hullSummary, type HullSummary } from '../../core/formatHydrostatics.js';
+import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
+import type { LoadedHull } from '../hullInput.js';
+import type { Computation } from './computation.js';
+
+const ParticularsSchema = z.object({
+  form: HullFormSchema,
+  units: z.string().describe('length unit of the offsets as given'),
+  points: z.number().int().describe('points of all sections together'),
+  knuckles: z.number().int().describe('points marked as knuckles (first and last of each section not counted)'),
+  lowestKeel: z.number().describe('z of the lowest keel point, m: drafts must lie above it'),
+  lowestDeck: z.number().describe('z of the lowest deck edge, m: drafts may not lie above it'),
+});
+
+export const CheckResultSchema = z
+  .object({
+    valid: z.boolean(),
+    hull: HullSummarySchema.nullable(),
+    particulars: ParticularsSchema.nullable(),
+    issues: z.array(z.object({ code: z.string(), path: z.array(z.union([z.string(), z.number()])), message: z.string() })),
+    caution: CautionField,
+  })
+  .describe('whether the offsets make a sound hull, and what it is');
+
+interface CheckResult {
+  valid: boolean;
+  hull: HullSummary | null;
+  particulars: z.infer<typeof ParticularsSchema> | null;
+  issues: { code: string; path: (string | number)[]; message: string }[];
+  caution: string;
+}
+
+function particulars(h: LoadedHull): z.infer<typeof ParticularsSchema> {
+  let points = 0;
+  let knuckles = 0;
+  for (const st of h.hull.stations) {
+    points += st.points.length;
+    for (let j = 1; j < st.points.length - 1; j++) if (st.points[j]!.knuckle) knuckles++;
+  }
+  return { form: h.form, units: h.units, points, knuckles, lowestKeel: h.prepared.lowestKeel, lowestDeck: h.prepared.lowestDeck };
+}
+
+export const check: Computation<Record<string, never>, CheckResult> = {
+  name: 'check',
+  summary: 'Check offsets',
+  description: 'Whether the offsets make a sound hull, with every issue (line and column, or field) when they do not, and the hull\'s particulars when they do.',
+  query: z.object({}),
+  body: z.object({}),
+  result: CheckResultSchema,
+  key: () => '',
+  run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], caution: CAUTION }),
+  invalid: (err: HalfbreadthError) => ({
+    valid: false,
+    hull: null,
+    particulars: null,
+    issues: err.issues.map((i) => ({ code: i.code, path: [...i.path], message: i.message })),
+    caution: CAUTION,
+  }),
+};

@@ -1,0 +1,26 @@
+/** The upright hydrostatic table (core/hydrostatics.ts) at a list of drafts and a water density. */
+import { z } from 'zod';
+import { hydrostaticTable } from '../../core/hydrostatics.js';
+import { hydrostaticResult, hydrostaticsCsv, type HydrostaticResult } from '../../core/formatHydrostatics.js';
+import { DensityBody, DensityQuery, DraftsBody, DraftsQuery } from '../requestFields.js';
+import { HydrostaticResultSchema } from '../responseSchemas.js';
+import type { Computation } from './computation.js';
+
+interface Params {
+  drafts: number[];
+  density: number;
+}
+
+export const hydrostatics: Computation<Params, HydrostaticResult> = {
+  name: 'hydrostatics',
+  summary: 'Upright hydrostatic table',
+  description:
+    'Hydrostatic particulars, upright and level, at each draft: volume, displacement, LCB, VCB, waterplane area, LCF, ' +
+    'IT, IL, BMt, BMl, KMt, KMl, TPC, MCT1cm, LWL, BWL, Am, the form coefficients and the wetted surface.',
+  query: z.object({ drafts: DraftsQuery, density: DensityQuery }),
+  body: z.object({ drafts: DraftsBody, density: DensityBody }),
+  result: HydrostaticResultSchema,
+  key: (p) => `drafts=${p.drafts.join(',')}&density=${p.density}`,
+  run: (h, p) => hydrostaticResult(h.hull, p.density, hydrostaticTable(h.prepared, p.drafts, p.density)),
+  csv: hydrostaticsCsv,
+};

@@ -1,0 +1,71 @@
+/**
+ * The service as a process: listens on HOST:PORT (default 127.0.0.1:3000), keeps hulls
+ * under HALFBREADTH_DATA (default ./data), loads the demo hulls, logs one JSON line per
+ * request (pino), and on SIGTERM or SIGINT stops taking requests, lets those in flight
+ * finish, closes the store and exits.
+ */
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { buildApp } from './app.js';
+import { preloadDemo } from './preloadDemo.js';
+import { SERVICE_LIMITS } from './serviceLimits.js';
+
+function port(text: string | undefined): number {
+  if (text === undefined || text === '') return 3000;
+  const n = Number(text);
+  if (!Number.isInteger(n) || n < 0 || n > 65535) {
+    process.stderr.write(`PORT must be an integer from 0 to 65535, not ${JSON.stringify(text)}\n`);
+    process.exit(2);
+  }
+  return n;
+}
+
+/** offsets-demo/ beside the package, from the sources (server/) or the build (dist/server/). */
+function demoDir(): string | undefined {
+  if (process.env.HALFBREADTH_DEMO !== undefined) return process.env.HALFBREADTH_DEMO === '' ? undefined : process.env.HALFBREADTH_DEMO;
+  for (const rel of ['../offsets-demo/', '../../offsets-demo/']) {
+    const dir = fileURLToPath(new URL(rel, import.meta.url));
+    if (existsSync(dir)) return dir;
+  }
+  return undefined;
+}
+
+const app = await buildApp({
+  dataDir: process.env.HALFBREADTH_DATA ?? './data',
+  logger: { level: process.env.HALFBREADTH_LOG_LEVEL ?? 'info' },
+});
+
+const demo = demoDir();
+if (demo !== undefined) {
+  for (const o of preloadDemo(app.halfbreadth.store, demo)) {
+    if (o.outcome === 'unreadable') app.log.warn({ demo: o }, 'demo hull not loaded');
+    else app.log.info({ demo: o }, 'demo hull');
+  }
+}
+
+let stopping = false;
+async function stop(signal: string): Promise<void> {
+  if (stopping) {
+    app.log.warn({ signal }, 'second signal: exiting at once');
+    process.exit(1);
+  }
+  stopping = true;
+  app.log.info({ signal }, 'stopping: finishing requests in flight');
+  const timer = setTimeout(() => {
+    app.log.error('requests in flight did not finish in time; exiting');
+    process.exit(1);
+  }, SERVICE_LIMITS.shutdownGrace);
+  timer.unref();
+  await app.close();
+  app.log.info('stopped');
+  process.exit(0);
+}
+process.on('SIGTERM', () => void stop('SIGTERM'));
+process.on('SIGINT', () => void stop('SIGINT'));
+
+try {
+  await app.listen({ port: port(process.env.PORT), host: process.env.HOST ?? '127.0.0.1' });
+} catch (e) {
+  app.log.error({ err: e }, 'cannot listen');
+  process.exit(1);
+}

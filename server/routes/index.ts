@@ -1,0 +1,7 @@
+/** Every route of the service, in the order the OpenAPI document and the API page list them. */
+import { COMPUTE_ROUTES } from './compute.js';
+import { HULL_ROUTES } from './hulls.js';
+import type { RouteSpec } from './routeSpec.js';
+import { SERVICE_ROUTES } from './service.js';
+
+export const ALL_ROUTES: readonly RouteSpec[] = [...COMPUTE_ROUTES, ...HULL_ROUTES, ...SERVICE_ROUTES];

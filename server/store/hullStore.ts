@@ -1,0 +1,191 @@
+/**
+ * The hull store: SQLite through better-sqlite3, one file under the data directory.
+ *
+ * Durability: WAL journal with synchronous=FULL, so a write acknowledged to a client
+ * has reached the disk and survives a crash or power loss; every write is one
+ * transaction, so a hull is either there whole or not at all. Each hull keeps its
+ * upload byte for byte (BLOB) beside its sha256 and the model parsed from it (JSON).
+ *
+ * better-sqlite3 is synchronous: a request's reads and writes cannot interleave with
+ * another's, which keeps each handler's view of a hull consistent without locks.
+ */
+import { createHash, randomBytes } from 'node:crypto';
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import Database from 'better-sqlite3';
+import type { HullModel } from '../../core/hullModel.js';
+import { migrate } from './migrations.js';
+
+/** How the offsets arrived: a CSV file in one of its forms, or a JSON model. */
+export type HullForm = 'grid' | 'points' | 'model';
+
+export interface NewHull {
+  readonly model: HullModel;
+  readonly mediaType: string;
+  /** The upload as it arrived. */
+  readonly source: Buffer;
+  readonly form: HullForm;
+  /** Length unit of the upload (a JSON model is in m). */
+  readonly units: string;
+}
+
+/** What the store says of a hull without reading its model. */
+export interface HullMeta {
+  readonly id: string;
+  readonly name: string;
+  readonly created: string;
+  readonly updated: string;
+  /** sha256 of the stored upload, hex. */
+  readonly hash: string;
+  readonly stations: number;
+  readonly form: HullForm;
+  readonly units: string;
+  readonly mediaType: string;
+  /** Size of the stored upload, bytes. */
+  readonly bytes: number;
+}
+
+export interface StoredHull extends HullMeta {
+  readonly model: HullModel;
+}
+
+export const STORE_FILE = 'hulls.sqlite3';
+
+export function sha256(bytes: Buffer | string): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
+
+/** 16 url-safe characters, 96 random bits. */
+export function newHullId(): string {
+  return randomBytes(12).toString('base64url');
+}
+
+interface MetaRow {
+  id: string;
+  name: string;
+  created: string;
+  updated: string;
+  source_hash: string;
+  stations: number;
+  form: string;
+  units: string;
+  media_type: string;
+  bytes: number;
+}
+
+const META_COLUMNS = 'id, name, created, updated, source_hash, stations, form, units, media_type, length(source) AS bytes';
+
+const toMeta = (r: MetaRow): HullMeta => ({
+  id: r.id,
+  name: r.name,
+  created: r.created,
+  updated: r.updated,
+  hash: r.source_hash,
+  stations: r.stations,
+  form: r.form as HullForm,
+  units: r.units,
+  mediaType: r.media_type,
+  bytes: r.bytes,
+});
+
+export class HullStore {
+  private readonly db: Database.Database;
+  private readonly stmt;
+
+  /** Open (creating if need be) the store in `dataDir`, or in memory for ':memory:'. */
+  static open(dataDir: string): HullStore {
+    if (dataDir === ':memory:') return new HullStore(new Database(':memory:'));
+    mkdirSync(dataDir, { recursive: true });
+    return new HullStore(new Database(join(dataDir, STORE_FILE)));
+  }
+
+  private constructor(db: Database.Database) {
+    this.db = db;
+    db.pragma('journal_mode = WAL');
+    db.pragma('synchronous = FULL');
+    db.pragma('busy_timeout = 5000');
+    migrate(db);
+    this.stmt = {
+      insert: db.prepare(
+        `INSERT INTO hulls (id, name, created, updated, media_type, source, source_hash, model, form, units, stations)
+         VALUES (@id, @name, @created, @updated, @mediaType, @source, @hash, @model, @form, @units, @stations)`,
+      ),
+      update: db.prepare(
+        `UPDATE hulls SET name = @name, updated = @updated, media_type = @mediaType, source = @source, source_hash = @hash,
+         model = @model, form = @form, units = @units, stations = @stations WHERE id = @id`,
+      ),
+      remove: db.prepare('DELETE FROM hulls WHERE id = ?'),
+      meta: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE id = ?`),
+      model: db.prepare<[string], MetaRow & { model: string }>(`SELECT ${META_COLUMNS}, model FROM hulls WHERE id = ?`),
+      source: db.prepare<[string], { media_type: string; source: Buffer }>('SELECT media_type, source FROM hulls WHERE id = ?'),
+      list: db.prepare<[], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls ORDER BY created, id`),
+      byHash: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE source_hash = ? ORDER BY created, id`),
+      count: db.prepare<[], { n: number }>('SELECT count(*) AS n FROM hulls'),
+    };
+  }
+
+  private row(id: string, h: NewHull, now: string) {
+    return {
+      id,
+      name: h.model.name,
+      updated: now,
+      mediaType: h.mediaType,
+      source: h.source,
+      hash: sha256(h.source),
+      model: JSON.stringify(h.model),
+      form: h.form,
+      units: h.units,
+      stations: h.model.stations.length,
+    };
+  }
+
+  /** Store a new hull under a fresh id (or `id`, for the demo hulls); committed to disk on return. */
+  create(h: NewHull, id: string = newHullId()): HullMeta {
+    const now = new Date().toISOString();
+    this.db.transaction(() => this.stmt.insert.run({ ...this.row(id, h, now), created: now }))();
+    return this.meta(id)!;
+  }
+
+  /** Replace a stored hull, keeping its id and creation time; undefined when there is none. */
+  replace(id: string, h: NewHull): HullMeta | undefined {
+    const changed = this.db.transaction(() => this.stmt.update.run(this.row(id, h, new Date().toISOString())).changes)();
+    return changed === 0 ? undefined : this.meta(id);
+  }
+
+  /** Remove a hull; false when there was none. */
+  delete(id: string): boolean {
+    return this.db.transaction(() => this.stmt.remove.run(id).changes)() > 0;
+  }
+
+  meta(id: string): HullMeta | undefined {
+    const r = this.stmt.meta.get(id);
+    return r === undefined ? undefined : toMeta(r);
+  }
+
+  get(id: string): StoredHull | undefined {
+    const r = this.stmt.model.get(id);
+    return r === undefined ? undefined : { ...toMeta(r), model: JSON.parse(r.model) as HullModel };
+  }
+
+  /** The upload as it arrived. */
+  source(id: string): { mediaType: string; bytes: Buffer } | undefined {
+    const r = this.stmt.source.get(id);
+    return r === undefined ? undefined : { mediaType: r.media_type, bytes: r.source };
+  }
+
+  list(): HullMeta[] {
+    return this.stmt.list.all().map(toMeta);
+  }
+
+  findByHash(hash: string): HullMeta[] {
+    return this.stmt.byHash.all(hash).map(toMeta);
+  }
+
+  count(): number {
+    return this.stmt.count.get()!.n;
+  }
+
+  close(): void {
+    if (this.db.open) this.db.close();
+  }
+}
