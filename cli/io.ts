@@ -62,7 +62,7 @@ export async function readInput(arg: string, io: CliIo): Promise<Input> {
     const code = (e as NodeJS.ErrnoException | undefined)?.code;
     if (typeof code !== 'string') throw e;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder, not a file' : code === 'EACCES' ? 'permission denied' : code;
-    throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['file'], `cannot read ${label}: ${why}`)]);
+    throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['file'], `cannot be read: ${why}`)]);
   }
   try {
     return { label, text: utf8.decode(bytes) };
