@@ -13,3 +13,7 @@ export * from './hydrostatics.js';
 export * from './draftList.js';
 export * from './csvSafe.js';
 export * from './formatHydrostatics.js';
+export * from './units.js';
+export * from './feetInches.js';
+export * from './readOffsets.js';
+export * from './writeOffsets.js';

@@ -522,35 +522,19 @@ describe('units', () => {
   });
 });
 
-describe('size and speed', () => {
+describe('size', () => {
   const gridText = (stations: number, waterlines: number): string => {
     const lines = [`x,${Array.from({ length: waterlines }, (_, k) => String(k * 0.05)).join(',')}`];
     for (let i = 0; i < stations; i++) lines.push(`${i * 0.5},${Array.from({ length: waterlines }, (_, k) => String(1 + 0.001 * k)).join(',')}`);
     return lines.join('\n');
   };
 
+  // Speed is measured in the benchmark (npm run bench), never asserted here.
   test('a grid of 2,000 stations by 500 waterlines is accepted', () => {
-    const t0 = performance.now();
     const r = readOffsetsCsv(gridText(2000, 500));
-    const ms = performance.now() - t0;
     expect(r.hull.stations).toHaveLength(2000);
     expect(r.hull.stations.every((s) => s.points.length === 500)).toBe(true);
     expect(r.hull.stations[1999]!.points[499]).toEqual({ y: 1.499, z: 499 * 0.05, knuckle: false });
-    // About a second on a laptop; the bound only catches a reader that has gone quadratic.
-    expect(ms).toBeLessThan(10_000);
-  });
-
-  test('a grid of 101 stations by 41 waterlines reads in well under 5 ms', () => {
-    const text = gridText(101, 41);
-    for (let k = 0; k < 20; k++) readOffsetsCsv(text);
-    const times: number[] = [];
-    for (let k = 0; k < 41; k++) {
-      const t0 = performance.now();
-      readOffsetsCsv(text);
-      times.push(performance.now() - t0);
-    }
-    times.sort((a, b) => a - b);
-    expect(times[20]!).toBeLessThan(5);
   });
 });
 
