@@ -1,0 +1,150 @@
+/**
+ * The hydrostatic table with its options: in SI or imperial units (core/imperial.ts),
+ * with or without the integration-error estimate of each row (core/errorEstimate.ts).
+ * Three forms as for the plain table (core/formatHydrostatics.ts, whose CSV preamble and
+ * JSON writer it reuses); every form carries the caution. Without either option the
+ * plain table's own formatter is the one to use.
+ */
+import Papa from 'papaparse';
+import { CAUTION } from './caution.js';
+import { csvSafeText } from './csvSafe.js';
+import { ERROR_ESTIMATE_FIELDS, type ErrorEstimate, type Halving } from './errorEstimate.js';
+import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
+import { HYDROSTATIC_FIELDS, type HydrostaticRow } from './hydrostaticFields.js';
+import type { HullModel } from './hullModel.js';
+import { cubicFeetPerLongTon, IMPERIAL_FIELDS, IMPERIAL_UNITS } from './imperial.js';
+
+export type UnitSystem = 'si' | 'imperial';
+
+export interface ReportField {
+  readonly key: string;
+  readonly unit: string;
+  readonly label: string;
+}
+
+/** A row: each field a number, and `errorEstimate` an object of numbers when asked for. */
+export type ReportRow = Record<string, number | Record<string, number>>;
+
+export interface HydrostaticsReport {
+  readonly hull: HullSummary;
+  readonly units: UnitSystem;
+  /** t/m³, whatever the units of the rows. */
+  readonly density: number;
+  readonly caution: string;
+  /** The fields of each row, with the unit they are given in. */
+  readonly fields: readonly ReportField[];
+  /** One object per draft; `errorEstimate` (estimated exact minus computed, in the row's units) when asked for. */
+  readonly rows: readonly ReportRow[];
+  /** How the coarse hull of the error estimate was made, when asked for. */
+  readonly halving?: Halving;
+}
+
+export interface ReportOptions {
+  readonly units: UnitSystem;
+  readonly errorEstimate?: { readonly estimates: readonly ErrorEstimate[]; readonly halving: Halving };
+}
+
+const SI_FIELDS: readonly (ReportField & { from: keyof HydrostaticRow; factor: number })[] = HYDROSTATIC_FIELDS.map((f) => ({
+  key: f.key,
+  unit: f.unit,
+  label: f.label,
+  from: f.key,
+  factor: 1,
+}));
+
+/** The unit of an estimated quantity in the chosen system, and its factor from SI. */
+function estimateUnit(siUnit: string, units: UnitSystem): { unit: string; factor: number } {
+  return units === 'si' ? { unit: siUnit, factor: 1 } : IMPERIAL_UNITS[siUnit]!;
+}
+
+export function hydrostaticsReport(hull: HullModel, density: number, rows: readonly HydrostaticRow[], options: ReportOptions): HydrostaticsReport {
+  const fields = options.units === 'si' ? SI_FIELDS : IMPERIAL_FIELDS;
+  const summary = hullSummary(hull);
+  const len = options.units === 'si' ? 1 : IMPERIAL_UNITS['m']!.factor;
+  const est = options.errorEstimate;
+  const out = rows.map((row, i) => {
+    const r: ReportRow = {};
+    for (const f of fields) r[f.key] = row[f.from] * f.factor;
+    if (est !== undefined) {
+      const e: Record<string, number> = {};
+      for (const q of ERROR_ESTIMATE_FIELDS) e[q.key] = est.estimates[i]![q.key] * estimateUnit(q.unit, options.units).factor;
+      r['errorEstimate'] = e;
+    }
+    return r;
+  });
+  return {
+    hull: { ...summary, ap: summary.ap * len, fp: summary.fp * len, lbp: summary.lbp * len },
+    units: options.units,
+    density,
+    caution: CAUTION,
+    fields: fields.map((f) => ({ key: f.key, unit: f.unit, label: f.label })),
+    rows: out,
+    ...(est === undefined ? {} : { halving: est.halving }),
+  };
+}
+
+/** The columns of the CSV and text forms: the fields, then one per estimated quantity. */
+function columns(r: HydrostaticsReport): (ReportField & { get: (row: ReportRow) => number; estimate: boolean })[] {
+  const cols = r.fields.map((f) => ({ ...f, get: (row: ReportRow) => row[f.key] as number, estimate: false }));
+  if (r.halving === undefined) return cols;
+  for (const q of ERROR_ESTIMATE_FIELDS) {
+    const unit = estimateUnit(q.unit, r.units).unit;
+    const label = `err ${r.fields.find((f) => f.key === q.key)!.label}`;
+    cols.push({ key: `${q.key}Error`, unit, label, get: (row) => (row['errorEstimate'] as Record<string, number>)[q.key]!, estimate: true });
+  }
+  return cols;
+}
+
+const IMPERIAL_SLUG: Record<string, string> = { 'LT/in': 'LT_per_in', 'LT.ft/in': 'LTft_per_in' };
+
+const header = (c: ReportField): string => (IMPERIAL_SLUG[c.unit] !== undefined ? `${c.key}_${IMPERIAL_SLUG[c.unit]}` : csvHeader(c.key, c.unit));
+
+function preambleLines(r: HydrostaticsReport): string[] {
+  const u = r.units === 'si' ? 'm' : 'ft';
+  const lines = [
+    `hull: ${csvSafeText(r.hull.name)}; LBP ${Number(r.hull.lbp.toPrecision(10))} ${u}`,
+    r.units === 'si'
+      ? `density: ${r.density} t/m3`
+      : `density: ${r.density} t/m3 (${Number(cubicFeetPerLongTon(r.density).toPrecision(6))} ft3 per long ton); units: feet and long tons (1 ft = 0.3048 m; 1 long ton = 1016.0469088 kg)`,
+  ];
+  if (r.halving !== undefined) {
+    lines.push('error estimates: exact minus computed by halving (every second station and waterline) and Richardson extrapolation for Simpson\'s h^4; assumes a smooth hull');
+    for (const n of r.halving.notes) lines.push(`error estimate: ${n}`);
+  }
+  return lines;
+}
+
+export function reportCsv(r: HydrostaticsReport): string {
+  const cols = columns(r);
+  const data = r.rows.map((row) => cols.map((c) => (Number.isFinite(c.get(row)) ? c.get(row) : '')));
+  return csvPreamble(preambleLines(r)) + Papa.unparse({ fields: cols.map(header), data }, { newline: '\r\n' }) + '\r\n';
+}
+
+/** Decimals shown in the text form for each unit (JSON and CSV keep full precision). */
+const DECIMALS: Record<string, number> = {
+  m: 3, m2: 2, m3: 3, m4: 1, t: 2, 't/cm': 3, 't.m/cm': 3,
+  ft: 3, ft2: 1, ft3: 1, ft4: 0, LT: 2, 'LT/in': 3, 'LT.ft/in': 2,
+  '-': 4,
+};
+
+export function reportText(r: HydrostaticsReport): string {
+  const cols = columns(r).map((c) => {
+    const cells = r.rows.map((row) => {
+      const v = c.get(row);
+      if (!Number.isFinite(v)) return '-';
+      return c.estimate ? v.toExponential(1) : v.toFixed(DECIMALS[c.unit] ?? 3);
+    });
+    const unit = c.unit === '-' ? '' : c.unit;
+    const width = Math.max(c.label.length, unit.length, ...cells.map((s) => s.length));
+    return { head: c.label.padStart(width), unit: unit.padStart(width), cells: cells.map((s) => s.padStart(width)) };
+  });
+  const lines = [
+    ...preambleLines(r),
+    cols.map((c) => c.head).join('  '),
+    cols.map((c) => c.unit).join('  '),
+    ...r.rows.map((_row, i) => cols.map((c) => c.cells[i]).join('  ')),
+    '',
+    CAUTION,
+  ];
+  return lines.join('\n') + '\n';
+}
