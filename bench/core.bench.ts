@@ -1,0 +1,161 @@
+/**
+ * Timings of the core and the command line, run by `npm run bench` (compiled to
+ * dist/bench/core.bench.js). Each figure is the median of many runs after warm-up, so
+ * that one slow run (a collection, another process) does not set it.
+ *
+ *   a. read and validate a grid offsets CSV of 101 stations x 41 waterlines
+ *   b. the hydrostatic table for it at 200 drafts: prepareHull, then hydrostaticTable,
+ *      and the two together
+ *   c. the same at 201 x 81 and at 401 x 161, so that growth with size shows
+ *   d. the command line end to end on the demo workboat (a child process each run)
+ *
+ * The hulls of a to c are made here from a smooth formula (not a drawing): a plan
+ * shape 1 - 0.8 xi^4 along the length times a section shape that rises from a quarter
+ * of the half-breadth at the keel to the whole at the deck.
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, readFileSync } from 'node:fs';
+import { cpus, platform, release } from 'node:os';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { hydrostaticTable } from '../core/hydrostatics.js';
+import { prepareHull } from '../core/preparedHull.js';
+import { readOffsetsCsv } from '../core/readOffsets.js';
+
+const LENGTH = 20; // m
+const BEAM = 6; // m
+const DEPTH = 3; // m
+
+/** The half-breadth of the formula hull, m. */
+function halfBreadth(x: number, z: number): number {
+  const xi = (2 * x) / LENGTH - 1;
+  const zeta = z / DEPTH;
+  const plan = 1 - 0.8 * xi ** 4;
+  const section = 0.25 + 0.75 * (1 - (1 - zeta) ** 3);
+  return (BEAM / 2) * plan * section;
+}
+
+/** The formula hull as grid CSV text: `stations` rows by `waterlines` columns, offsets to the millimetre. */
+export function gridCsv(stations: number, waterlines: number): string {
+  const zs = Array.from({ length: waterlines }, (_, k) => (DEPTH * k) / (waterlines - 1));
+  const lines = ['# name: bench hull (formula)', '# units: m', ['x', ...zs.map((z) => z.toFixed(4))].join(',')];
+  for (let i = 0; i < stations; i++) {
+    const x = (LENGTH * i) / (stations - 1);
+    lines.push([x.toFixed(4), ...zs.map((z) => halfBreadth(x, z).toFixed(3))].join(','));
+  }
+  return lines.join('\n') + '\n';
+}
+
+/** `count` drafts evenly spread from just above the keel to the deck edge. */
+function drafts(count: number): number[] {
+  return Array.from({ length: count }, (_, k) => (DEPTH * (k + 1)) / count);
+}
+
+interface Timing {
+  median: number;
+  reps: number;
+}
+
+/**
+ * Median wall time of `f`, ms: a warm-up (so the optimising compiler has settled), then
+ * at least `minReps` runs and at least `minMs` of running, at most `maxReps` runs.
+ */
+function measure(f: () => unknown, minReps = 15, minMs = 400, maxReps = 2000): Timing {
+  const warm = performance.now();
+  for (let k = 0; k < 5 || (performance.now() - warm < 100 && k < maxReps); k++) f();
+  const times: number[] = [];
+  const start = performance.now();
+  while (times.length < maxReps && (times.length < minReps || performance.now() - start < minMs)) {
+    const t0 = process.hrtime.bigint();
+    f();
+    times.push(Number(process.hrtime.bigint() - t0) / 1e6);
+  }
+  times.sort((a, b) => a - b);
+  const mid = times.length >> 1;
+  const median = times.length % 2 === 1 ? times[mid]! : (times[mid - 1]! + times[mid]!) / 2;
+  return { median, reps: times.length };
+}
+
+/** The project folder: the nearest parent holding package.json (this file runs from dist/bench or bench). */
+function projectRoot(): string {
+  let dir = dirname(fileURLToPath(import.meta.url));
+  while (!existsSync(join(dir, 'package.json'))) {
+    const up = dirname(dir);
+    if (up === dir) throw new Error('package.json not found above the bench');
+    dir = up;
+  }
+  return dir;
+}
+
+interface Line {
+  what: string;
+  size: string;
+  t: Timing;
+  target?: number;
+}
+
+const TABLE_DRAFTS = 200;
+
+function coreLines(stations: number, waterlines: number, withTargets: boolean): Line[] {
+  const size = `${stations} x ${waterlines}`;
+  const text = gridCsv(stations, waterlines);
+  const { hull } = readOffsetsCsv(text);
+  const prepared = prepareHull(hull);
+  const ds = drafts(TABLE_DRAFTS);
+  const out: Line[] = [
+    { what: 'a. read and validate grid CSV', size, t: measure(() => readOffsetsCsv(text)) },
+    { what: 'b. prepareHull', size, t: measure(() => prepareHull(hull)) },
+    { what: `b. hydrostaticTable, ${TABLE_DRAFTS} drafts`, size, t: measure(() => hydrostaticTable(prepared, ds)) },
+    { what: `b. prepare + table, ${TABLE_DRAFTS} drafts`, size, t: measure(() => hydrostaticTable(prepareHull(hull), ds)) },
+  ];
+  if (withTargets) out[3]!.target = 5;
+  return out;
+}
+
+function commandLine(root: string): Line {
+  const bin = join(root, 'bin', 'halfbreadth.js');
+  const args = [bin, 'hydrostatics', join(root, 'offsets-demo', 'workboat.csv'), '--drafts', '0.1:0.01:2.2', '--format', 'csv'];
+  const once = (): void => {
+    const r = spawnSync(process.execPath, args, { cwd: root, encoding: 'utf8' });
+    if (r.status !== 0) throw new Error(`the command line failed (exit ${r.status}): ${r.stderr}`);
+  };
+  // Each run is a whole process start; ten are enough for a median of that.
+  return { what: 'd. command line, workboat, 211 drafts', size: 'demo', t: measure(once, 10, 0, 10), target: 500 };
+}
+
+function fmt(ms: number): string {
+  return ms >= 100 ? ms.toFixed(0) : ms >= 10 ? ms.toFixed(1) : ms.toFixed(2);
+}
+
+function report(lines: readonly Line[]): string {
+  const rows = lines.map((l) => [
+    l.what,
+    l.size,
+    fmt(l.t.median),
+    String(l.t.reps),
+    l.target === undefined ? '' : `${l.target < 500 ? '<=' : '<'} ${l.target} ms: ${l.t.median <= l.target ? 'met' : 'MISSED'}`,
+  ]);
+  const head = ['case', 'size', 'median ms', 'runs', 'target'];
+  const w = head.map((h, k) => Math.max(h.length, ...rows.map((r) => r[k]!.length)));
+  const line = (r: readonly string[]): string =>
+    r.map((c, k) => (k === 2 || k === 3 ? c.padStart(w[k]!) : c.padEnd(w[k]!))).join('  ').trimEnd();
+  return [line(head), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
+}
+
+function main(): void {
+  const root = projectRoot();
+  const cpu = cpus();
+  const version = (JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')) as { version: string }).version;
+  console.log(`Halfbreadth ${version} core benchmark`);
+  console.log(`machine: ${cpu[0]?.model ?? 'unknown cpu'}, ${cpu.length} cores, node ${process.version}, ${platform()} ${release()}`);
+  console.log('');
+  const lines: Line[] = [
+    ...coreLines(101, 41, true),
+    ...coreLines(201, 81, false),
+    ...coreLines(401, 161, false),
+    commandLine(root),
+  ];
+  console.log(report(lines));
+}
+
+main();
