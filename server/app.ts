@@ -8,7 +8,7 @@ import { buildOpenapi } from './openapi.js';
 import { OneLinePerRequest } from './plugins/requestLog.js';
 import { registerUploadBody } from './plugins/uploadBody.js';
 import { PreparedCache } from './preparedCache.js';
-import { registerProblemHandler } from './problem.js';
+import { frameworkProblem, registerProblemHandler } from './problem.js';
 import { ALL_ROUTES } from './routes/index.js';
 import { registerRoutes } from './routes/routeSpec.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
@@ -44,7 +44,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     // Closing stops idle keep-alive sockets at once and lets requests in flight finish.
     forceCloseConnections: 'idle',
     return503OnClosing: true,
-    exposeHeadRoutes: false,
+    frameworkErrors: frameworkProblem,
   });
   const cache = new PreparedCache(store, SERVICE_LIMITS.preparedCacheSize);
   const ctx: ServiceContext = { store, cache, openapi: buildOpenapi(ALL_ROUTES) };

@@ -33,7 +33,9 @@ export function hullFromJson(offsets: unknown): ReadHull {
     return { hull: readHullJson(offsets), form: 'model', units: 'm' };
   } catch (e) {
     if (!(e instanceof HalfbreadthError)) throw e;
-    throw new HalfbreadthError(e.issues.map((i) => ({ ...i, path: ['offsets', ...i.path], message: `offsets.${i.message}` })));
+    // readHullJson's messages begin with the path in the model ("stations[2].x: ...", "the hull: ...").
+    const where = (m: string): string => (m.startsWith('the hull') ? `offsets${m.slice('the hull'.length)}` : `offsets.${m}`);
+    throw new HalfbreadthError(e.issues.map((i) => ({ ...i, path: ['offsets', ...i.path], message: where(i.message) })));
   }
 }
 

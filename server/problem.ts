@@ -124,6 +124,8 @@ function fromFastify(err: FastifyError): { code: ProblemCode; message: string } 
       return { code: 'HYD_BODY_UNREADABLE', message: 'the body is not as long as its Content-Length says' };
     case 'FST_ERR_BAD_URL':
       return { code: 'HYD_BAD_ARGUMENT', message: 'the URL is malformed (bad percent-encoding)' };
+    case 'FST_ERR_MAX_PARAM_LENGTH':
+      return { code: 'HYD_ROUTE_NOT_FOUND', message: 'a segment of the path is too long for any id this service gives' };
     default:
       break;
   }
@@ -133,6 +135,12 @@ function fromFastify(err: FastifyError): { code: ProblemCode; message: string } 
   if (status === 404) return { code: 'HYD_ROUTE_NOT_FOUND', message: err.message };
   if (status >= 400 && status < 500) return { code: 'HYD_BAD_ARGUMENT', message: err.message };
   return { code: 'HYD_INTERNAL', message: 'the service failed unexpectedly; the failure is logged' };
+}
+
+/** Errors of Fastify's router (bad percent-encoding, an overlong path segment), which come before any route: Fastify's `frameworkErrors` option. */
+export function frameworkProblem(err: FastifyError, req: FastifyRequest, reply: FastifyReply): void {
+  const { code, message } = fromFastify(err);
+  void sendProblem(reply, problemDocument(code, [{ code, path: ['url'], message }], message, req));
 }
 
 function sendProblem(reply: FastifyReply, doc: Problem, headers: Readonly<Record<string, string>> = {}): FastifyReply {

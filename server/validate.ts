@@ -36,6 +36,15 @@ function issuesOf(error: z.ZodError, codes: FieldCodes): Issue[] {
   return out;
 }
 
+/** A JSON body must be an object of named fields. */
+export function requireObject(value: unknown, shape: string): Record<string, unknown> {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    const got = value === null ? 'null' : Array.isArray(value) ? 'an array' : `a ${typeof value}`;
+    throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['body'], `the JSON body must be an object ${shape}, not ${got}`)]);
+  }
+  return value as Record<string, unknown>;
+}
+
 /** The value parsed by `schema`, or a HalfbreadthError with every issue. */
 export function parseOrFail<S extends z.ZodType>(schema: S, value: unknown, codes: FieldCodes = {}): z.output<S> {
   const r = schema.safeParse(value);

@@ -12,7 +12,7 @@ import { hullFromCsv, hullFromJson, loadHull, type LoadedHull } from '../hullInp
 import { chooseFormat } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, type Format } from '../requestFields.js';
-import { parseOrFail } from '../validate.js';
+import { parseOrFail, requireObject } from '../validate.js';
 import { sendResult } from './answer.js';
 import type { RouteSpec } from './routeSpec.js';
 import { requireHullMeta } from './storedHull.js';
@@ -65,7 +65,7 @@ function postRoute(c: AnyComputation): RouteSpec {
         paramsNotInQuery(c, req);
         const q = parseOrFail(s.jsonQuery, req.query, FIELD_CODES);
         format = chooseFormat(req, q.format as Format | undefined, formatsOf(c));
-        const body = parseOrFail(s.jsonBody, upload.json, FIELD_CODES);
+        const body = parseOrFail(s.jsonBody, requireObject(upload.json, `{"offsets": <hull model>${Object.keys(c.body.shape).map((k) => `, "${k}"`).join('')}}`), FIELD_CODES);
         params = body;
         read = () => loadHull(hullFromJson(body.offsets));
       }

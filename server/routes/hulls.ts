@@ -19,7 +19,7 @@ import { HullListSchema, HullRecordSchema, HullWithOffsetsSchema } from '../resp
 import { HullModelSchema } from '../../core/hullModel.js';
 import { serviceFail } from '../serviceErrors.js';
 import type { HullMeta, NewHull } from '../store/hullStore.js';
-import { parseOrFail } from '../validate.js';
+import { parseOrFail, requireObject } from '../validate.js';
 import type { RouteSpec } from './routeSpec.js';
 import { requireHullMeta } from './storedHull.js';
 
@@ -49,7 +49,7 @@ function uploadedHull(req: FastifyRequest): NewHull {
   if (upload.mediaType === 'text/csv') {
     read = hullFromCsv(upload.text);
   } else {
-    const body = parseOrFail(UploadJsonBody, upload.json, FIELD_CODES);
+    const body = parseOrFail(UploadJsonBody, requireObject(upload.json, '{"offsets": <hull model>, "name"?}'), FIELD_CODES);
     if (body.name !== undefined && name !== undefined) fail('HYD_BAD_ARGUMENT', ['name'], 'name: given both in the query and in the body; give it once');
     name ??= body.name;
     read = hullFromJson(body.offsets);
