@@ -50,12 +50,15 @@ export function toJson(value: unknown): string {
 
 /**
  * Leading comment lines of every CSV result: the caution, then what the table is of.
- * Line breaks and the separators spreadsheets split on when they import (comma,
- * semicolon where the decimal mark is a comma, tab) become spaces, so each line stays
- * one cell led by `#` and no text of the input can start a cell of its own.
+ * Line breaks and commas become spaces, so each line stays one cell led by `#`. A
+ * spreadsheet may also split on a semicolon (where the decimal mark is a comma) or a
+ * tab when it imports; one of those followed by =, +, - or @ would start a formula cell
+ * (a hull name such as `a;=1+2`), so it becomes a space too. Our own `;` between
+ * phrases stays.
  */
 export function csvPreamble(lines: readonly string[]): string {
-  return [`# ${CAUTION}`, ...lines.map((l) => `# ${l.replace(/[\r\n,;\t]+/g, ' ')}`)].join('\r\n') + '\r\n';
+  const tidy = (l: string): string => l.replace(/[\r\n,]+/g, ' ').replace(/[;\t][;\t\s]*(?=[=+\-@])/g, ' ');
+  return [`# ${CAUTION}`, ...lines.map((l) => `# ${tidy(l)}`)].join('\r\n') + '\r\n';
 }
 
 /** The hydrostatic table as CSV: caution line, hull and density lines, header, one row per draft. */
