@@ -87,3 +87,13 @@ export function chooseFormat(requested: string | undefined, allowed: readonly Fo
   }
   return found;
 }
+
+/**
+ * Text for a terminal with its control characters (other than line ends) shown as `?`:
+ * a hull name in a file could otherwise carry escape sequences that retitle or
+ * rewrite the terminal.
+ */
+export function terminalSafe(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  return text.replace(/[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/g, '?');
+}

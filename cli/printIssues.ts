@@ -3,10 +3,11 @@
  * the input file for the offsets (`offsets.csv: line 7, column 3 (station x = 1.5 m,
  * WL 0.50 m): half-breadth -0.3 < 0`), the option for a command-line value
  * (`--drafts: draft 3 m is outside the hull: ...`). The messages themselves come from
- * the core and already name the line, column or field and the rule.
+ * the core and already name the line, column or field and the rule. Control characters
+ * that a file's text could bring into a message are shown as `?` (cli/io.ts terminalSafe).
  */
 import type { Issue } from '../core/errors.js';
-import type { TextSink } from './io.js';
+import { terminalSafe, type TextSink } from './io.js';
 
 /** Path roots that belong to a command-line option rather than to the input file. */
 const OPTION_ROOTS: Readonly<Record<string, string>> = { drafts: '--drafts', density: '--density' };
@@ -24,7 +25,7 @@ export function issueSource(i: Issue, fileLabel: string | undefined, program: st
 
 /** One line per issue, then a count when there is more than one. */
 export function issueLines(issues: readonly Issue[], fileLabel: string | undefined, program: string): string[] {
-  const lines = issues.map((i) => `${issueSource(i, fileLabel, program)}: ${i.message}`);
+  const lines = issues.map((i) => terminalSafe(`${issueSource(i, fileLabel, program)}: ${i.message}`));
   if (issues.length > 1) lines.push(`${program}: ${issues.length} problems found`);
   return lines;
 }

@@ -318,6 +318,32 @@ describe('bad input', () => {
   });
 });
 
+describe('text from a file on a terminal', () => {
+  // ESC starts a terminal control sequence (ECMA-48); a file's text must not bring one.
+  const ESC = '\u001b';
+  const named = `# name: evil${ESC}]0;owned${ESC}\\ hull\n` + readFileSync(WORKBOAT, 'utf8').replace(/^# name:.*\n/m, '');
+
+  test('a hull name with control characters is shown with ? in the table', async () => {
+    const r = await run(['hydrostatics', 'named.csv', '--drafts', '1', '--format', 'table'], { files: { 'named.csv': named } });
+    expect(r.code).toBe(0);
+    expect(r.out).not.toContain(ESC);
+    expect(r.out.split('\n')[0]).toMatch(/^evil\?\]0;owned\?\\ hull: /);
+  });
+
+  test('and in the particulars of check', async () => {
+    const r = await run(['check', 'named.csv'], { files: { 'named.csv': named } });
+    expect(r.out).not.toContain(ESC);
+    expect(r.out).toContain('evil?]0;owned?');
+  });
+
+  test('and in error messages', async () => {
+    const r = await run(['check', 'bad.csv'], { files: { 'bad.csv': `x,0,1\n0,1,${ESC}[2J\n1,1,1\n2,1,1\n` } });
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/^bad\.csv: line 2, column 3/m);
+    expect(r.err).not.toContain(ESC);
+  });
+});
+
 describe('internal faults', () => {
   const broken = async (): Promise<Uint8Array> => {
     throw new TypeError('disk on fire');

@@ -11,7 +11,7 @@ import { readOffsetsCsv, type ReadResult } from '../../core/readOffsets.js';
 import { toJson } from '../../core/formatHydrostatics.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, type CliIo } from '../io.js';
+import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
 import { issueLines } from '../printIssues.js';
 
 /** A remark on a sound hull that a person should look at, such as an offset that is not fair. */
@@ -142,12 +142,12 @@ Exit status: 0 when the file reads without error, 2 when it has errors.`,
     const warnings = read === undefined ? [] : WARNING_CHECKS.flatMap((f) => f(read.hull));
     const found = read === undefined ? null : particulars(read);
     if (errors.length > 0) io.stderr.write(issueLines(errors, input.label, program).join('\n') + '\n');
-    if (warnings.length > 0) io.stderr.write(warnings.map((w) => `${input.label}: warning: ${w.message}`).join('\n') + '\n');
+    if (warnings.length > 0) io.stderr.write(warnings.map((w) => terminalSafe(`${input.label}: warning: ${w.message}`)).join('\n') + '\n');
     if (format === 'json') {
       const report: CheckReport = { errors, warnings, particulars: found, caution: CAUTION };
       io.stdout.write(toJson(report) + '\n');
     } else if (found !== null) {
-      io.stdout.write(particularsText(input.label, found));
+      io.stdout.write(terminalSafe(particularsText(input.label, found)));
     }
     return errors.length > 0 ? EXIT.badInput : EXIT.ok;
   },

@@ -14,7 +14,7 @@ import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, type CliIo } from '../io.js';
+import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
 
 const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
 
@@ -80,7 +80,7 @@ Example:
     const { hull } = read!;
     const rows = hydrostaticTable(prepareHull(hull), drafts!, density!);
     const result = hydrostaticResult(hull, density!, rows);
-    const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : hydrostaticsText(result);
+    const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : terminalSafe(hydrostaticsText(result));
     io.stdout.write(text);
     return EXIT.ok;
   },
