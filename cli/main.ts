@@ -25,10 +25,10 @@ ${COMMANDS.map((c) => `  ${PROGRAM} ${c.synopsis}`).join('\n')}
 Commands:
 ${COMMANDS.map((c) => `  ${c.name.padEnd(w)}  ${c.summary}`).join('\n')}
 
-Input: an offsets CSV in the grid form (x, then waterline heights) or the points
-form (x, y, z and optionally knuckle), lengths in m, mm, ft, in or ft-in-8 as its
-'# units:' line says; - reads standard input. Lengths typed on the command line
-(drafts) are metres.
+Input: an offsets CSV, grid form (x, then waterline heights) or points form
+(x, y, z and optionally knuckle), in m, mm, ft, in or ft-in-8 as its '# units:'
+line says; - reads standard input. Lengths typed on the command line (drafts)
+are metres.
 
 Output: --format table|csv|json chooses the form and always wins. Without it, a
 command writes a table when stdout is a terminal and CSV when it is piped or
@@ -37,10 +37,10 @@ redirected, so '> table.csv' gives a file a spreadsheet opens.
 Exit status: 0 success; 2 bad input (every problem listed on stderr, with its
 line and column); 1 internal fault (HALFBREADTH_DEBUG=1 shows where).
 
-Every result carries a caution: the figures are for design and estimating from the
-offsets supplied; they do not replace an approved stability book, and decisions on
-the safety of a vessel defer to classification rules, the flag or local authority's
-regulations and a qualified naval architect.
+Every result carries a caution: its figures come from the offsets supplied and
+are for design and estimating. They do not replace an approved stability book;
+decisions on the safety of a vessel defer to classification society rules, the
+flag or local authority's regulations and a qualified naval architect.
 `;
 }
 

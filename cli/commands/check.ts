@@ -103,7 +103,7 @@ export function particularsText(label: string, p: Particulars): string {
 
 export const check: Command = {
   name: 'check',
-  summary: 'validate an offsets file and print its particulars, or all its errors',
+  summary: 'validate an offsets file: its particulars, or every error',
   synopsis: 'check <file|-> [--format table|json]',
   positionals: ['<file|->'],
   options: { format: { type: 'string', example: '--format json' } },

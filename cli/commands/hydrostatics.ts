@@ -35,7 +35,7 @@ export function densityOption(values: CommandArgs['values']): number {
 export const hydrostatics: Command = {
   name: 'hydrostatics',
   summary: 'the upright hydrostatic table of a hull at a list of drafts',
-  synopsis: 'hydrostatics <file|-> --drafts <list> [--density <t/m3> | --fresh] [--format table|csv|json]',
+  synopsis: 'hydrostatics <file|-> --drafts <list> [options]',
   positionals: ['<file|->'],
   options: {
     drafts: { type: 'string', required: true, example: '--drafts 0.2:0.1:1.2,1.25' },
@@ -66,8 +66,11 @@ Forms:
   json    { "hull": {...}, "density": ..., "caution": "...", "rows": [...] },
           one row object per draft; a coefficient that is undefined is null
 
+Every form carries the caution. Exit status: 0 done; 2 bad input, with every
+problem of the file, the drafts and the options listed on stderr.
+
 Example:
-  halfbreadth hydrostatics offsets-demo/workboat.csv --drafts 0.5:0.25:2 > workboat.csv`,
+  halfbreadth hydrostatics offsets-demo/workboat.csv --drafts 0.5:0.25:2 > wb.csv`,
   async run(args: CommandArgs, io: CliIo): Promise<number> {
     const issues: Issue[] = [];
     const { values } = args;
