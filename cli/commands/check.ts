@@ -107,10 +107,10 @@ export const check: Command = {
   synopsis: 'check <file|-> [--format table|json]',
   positionals: ['<file|->'],
   options: { format: { type: 'string', example: '--format json' } },
-  help: `Reads an offsets file and reports either what it holds (name, form, units,
-stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge heights,
-and the drafts a hydrostatic table of it may use) or every error found, each with
-its line and column.
+  help: `Reads an offsets file and reports either what it holds (name, form,
+units, stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge
+heights, and the drafts a hydrostatic table of it may use) or every error
+found, each with its line and column.
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input

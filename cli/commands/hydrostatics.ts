@@ -43,16 +43,18 @@ export const hydrostatics: Command = {
     fresh: { type: 'boolean' },
     format: { type: 'string', example: '--format csv' },
   },
-  help: `The upright, level hydrostatic particulars of the hull in an offsets file at each
-draft of a list: volume, displacement, LCB, VCB (KB), waterplane area, LCF, IT, IL,
-BMt, BMl, KMt, KMl, TPC, MCT1cm, LWL, BWL, Am, Cb, Cm, Cp, Cwp and wetted surface.
+  help: `The upright, level hydrostatic particulars of the hull in an offsets file
+at each draft of a list: volume, displacement, LCB, VCB (KB), waterplane area,
+LCF, IT, IL, BMt, BMl, KMt, KMl, TPC, MCT1cm, LWL, BWL, Am, Cb, Cm, Cp, Cwp and
+wetted surface.
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input
 
 Options:
-  --drafts <list>     drafts in metres above the baseline, comma-separated values
-                      and ranges from:step:to, e.g. 0.2:0.1:1.2,1.25 (required)
+  --drafts <list>     drafts in metres above the baseline: values and ranges
+                      from:step:to, comma-separated, e.g. 0.2:0.1:1.2,1.25
+                      (required)
   --density <t/m3>    water density, 0.9 to 1.1 (default 1.025, sea water)
   --fresh             fresh water: density 1.000
   --format <form>     table, csv or json (default: table on a terminal, csv when
@@ -61,8 +63,9 @@ Options:
 
 Forms:
   table   aligned columns under a units line, for reading
-  csv     one row per draft; headers carry their units (volume_m3, tpc_t_per_cm);
-          leading # lines give the caution, the hull and the density
+  csv     one row per draft; headers carry their units (volume_m3,
+          tpc_t_per_cm); leading # lines give the caution, the hull and the
+          density
   json    { "hull": {...}, "density": ..., "caution": "...", "rows": [...] },
           one row object per draft; a coefficient that is undefined is null
 
@@ -70,7 +73,8 @@ Every form carries the caution. Exit status: 0 done; 2 bad input, with every
 problem of the file, the drafts and the options listed on stderr.
 
 Example:
-  halfbreadth hydrostatics offsets-demo/workboat.csv --drafts 0.5:0.25:2 > wb.csv`,
+  halfbreadth hydrostatics offsets-demo/workboat.csv --drafts 0.5:0.25:2 \\
+    > workboat-hydrostatics.csv`,
   async run(args: CommandArgs, io: CliIo): Promise<number> {
     const issues: Issue[] = [];
     const { values } = args;
