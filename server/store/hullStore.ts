@@ -185,6 +185,15 @@ export class HullStore {
     return this.stmt.count.get()!.n;
   }
 
+  /** The durability settings in force on this connection (journal mode, and synchronous: 2 is FULL). */
+  settings(): { journalMode: string; synchronous: number; schemaVersion: number } {
+    return {
+      journalMode: this.db.pragma('journal_mode', { simple: true }) as string,
+      synchronous: this.db.pragma('synchronous', { simple: true }) as number,
+      schemaVersion: this.db.pragma('user_version', { simple: true }) as number,
+    };
+  }
+
   close(): void {
     if (this.db.open) this.db.close();
   }
