@@ -17,7 +17,7 @@ import { CAUTION } from '../core/caution.js';
 import { ERROR_CODES, HalfbreadthError, type ErrorCode } from '../core/errors.js';
 import { SERVICE_CODES, ServiceError, type ProblemCode, type ProblemIssue } from './serviceErrors.js';
 
-/** HTTP status of each code. 400: unreadable bodies and bad query values; 422: input that reads but breaks a rule of a hull. */
+/** HTTP status of each code. 400: unreadable bodies and bad query values; 413: over the body limit or the hull-size limits of core/limits.ts; 422: input that reads but breaks a rule of a hull. */
 export const STATUS_OF_CODE: Readonly<Record<ProblemCode, number>> = {
   HYD_CSV_UNREADABLE: 400,
   HYD_HEADER: 422,
@@ -34,7 +34,7 @@ export const STATUS_OF_CODE: Readonly<Record<ProblemCode, number>> = {
   HYD_METADATA_VALUE: 422,
   HYD_METADATA_PLACE: 422,
   HYD_PERPENDICULARS: 422,
-  HYD_TOO_LARGE: 422,
+  HYD_TOO_LARGE: 413,
   HYD_ROW_LENGTH: 422,
   HYD_MODEL_INVALID: 422,
   HYD_DRAFT_LIST: 400,
