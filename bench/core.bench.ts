@@ -15,7 +15,7 @@
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
-import { cpus, platform, release } from 'node:os';
+import { cpus, loadavg, platform, release } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { hydrostaticTable } from '../core/hydrostatics.js';
@@ -148,6 +148,8 @@ function main(): void {
   const version = (JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')) as { version: string }).version;
   console.log(`Halfbreadth ${version} core benchmark`);
   console.log(`machine: ${cpu[0]?.model ?? 'unknown cpu'}, ${cpu.length} cores, node ${process.version}, ${platform()} ${release()}`);
+  // Other work on the machine slows every figure; the load says how much there was.
+  console.log(`load average (1 min) at start: ${loadavg()[0]!.toFixed(2)}`);
   console.log('');
   const lines: Line[] = [
     ...coreLines(101, 41, true),
