@@ -126,7 +126,8 @@ export class Section {
   private readonly cz: Float64Array;
   private readonly firstPoint: Int32Array; // index of each piece's first point
   private readonly pointCount: Int32Array; // points in each piece
-  private readonly factor: Float64Array; // wetted-surface slope factor at each point
+  private readonly factor: Float64Array; // wetted-surface slope factor at each point, for the run above it
+  private readonly factorBelow: Float64Array; // the same for the run below it (differs only at a corner)
   private readonly cumArea: Float64Array; // at piece starts, half-section integrals from the keel
   private readonly cumMz: Float64Array;
   private readonly cumMy: Float64Array;
@@ -134,7 +135,13 @@ export class Section {
   private readonly cumWetted: Float64Array;
   private readonly ys: Float64Array;
   private readonly zs: Float64Array;
-  private readonly slope: Float64Array; // dz/ds at each point, from its neighbours in the run
+  // Unit tangent (dy/ds, dz/ds) at each point, from its neighbours in the run above it
+  // and in the run below it: the two differ only at a corner, which has one of each.
+  private readonly tanY: Float64Array;
+  private readonly tanZ: Float64Array;
+  private readonly tanYBelow: Float64Array;
+  private readonly tanZBelow: Float64Array;
+  private readonly corners: Int32Array; // indices of the corner points, keel and deck edge included
 
   constructor(points: readonly SectionPointInput[]) {
     const n = points.length;
@@ -153,7 +160,11 @@ export class Section {
     const corners: number[] = [0];
     for (let k = 1; k < n - 1; k++) if (points[k]!.knuckle === true) corners.push(k);
     corners.push(n - 1);
-    this.slope = new Float64Array(n);
+    this.corners = Int32Array.from(corners);
+    this.tanY = new Float64Array(n);
+    this.tanZ = new Float64Array(n);
+    this.tanYBelow = new Float64Array(n);
+    this.tanZBelow = new Float64Array(n);
     const ys = this.ys;
     const zs = this.zs;
     // Pieces are gathered in plain arrays, then packed into typed arrays once.
@@ -179,8 +190,19 @@ export class Section {
         const a = Math.max(s, k - 1);
         const b = Math.min(e, k + 1);
         const dz = zs[b]! - zs[a]!;
-        const len = Math.hypot(ys[b]! - ys[a]!, dz);
-        this.slope[k] = len > 0 ? dz / len : 1;
+        const dy = ys[b]! - ys[a]!;
+        const len = Math.hypot(dy, dz);
+        const ty = len > 0 ? dy / len : 0;
+        const tz = len > 0 ? dz / len : 1;
+        // A corner ends one run and starts the next: its tangent on each side is its own.
+        if (k < e || e === n - 1) {
+          this.tanY[k] = ty;
+          this.tanZ[k] = tz;
+        }
+        if (k > s || s === 0) {
+          this.tanYBelow[k] = ty;
+          this.tanZBelow[k] = tz;
+        }
       }
       const addPiece = (i0: number, count: number): void => {
         first.push(i0);
@@ -216,6 +238,7 @@ export class Section {
     this.firstPoint = new Int32Array(first);
     this.pointCount = new Int32Array(size);
     this.factor = new Float64Array(n).fill(1);
+    this.factorBelow = new Float64Array(n).fill(1);
     this.cumArea = new Float64Array(count + 1);
     this.cumMz = new Float64Array(count + 1);
     this.cumMy = new Float64Array(count + 1);
@@ -240,17 +263,29 @@ export class Section {
     return this.zs;
   }
 
-  /** dz/ds at each point: the sine of the section's slope from horizontal there. */
-  pointSlopes(): Float64Array {
-    return this.slope;
+  /**
+   * The unit tangent (dy/ds, dz/ds) at each point, up the section, in the run above the
+   * point and in the run below it (the deck edge has only the one below, the keel only
+   * the one above; both are filled). They differ only at corners.
+   */
+  pointTangents(): { y: Float64Array; z: Float64Array; yBelow: Float64Array; zBelow: Float64Array } {
+    return { y: this.tanY, z: this.tanZ, yBelow: this.tanYBelow, zBelow: this.tanZBelow };
+  }
+
+  /** Indices of the corner points: the keel, every knuckle, the deck edge. */
+  cornerIndices(): Int32Array {
+    return this.corners;
   }
 
   /**
    * Set the wetted-surface slope factor at each point (1 = the surface runs square to
-   * the section); between points the factor is read linearly along the curve.
+   * the section), for the run above each point and for the run below it (the same
+   * unless the point is a knuckle); between points the factor is read linearly along
+   * the curve.
    */
-  setWettedFactors(factors: ArrayLike<number>): void {
+  setWettedFactors(factors: ArrayLike<number>, factorsBelow: ArrayLike<number> = factors): void {
     this.factor.set(factors);
+    this.factorBelow.set(factorsBelow);
     const part = emptyValues();
     const cum = this.cumWetted;
     for (let i = 0; i < this.pieceCount; i++) {
@@ -308,7 +343,7 @@ export class Section {
     const z0 = cz[o]!, z1 = cz[o + 1]!, z2 = cz[o + 2]!, z3 = cz[o + 3]!;
     const span = this.span[i]!;
     const fA = this.factor[this.firstPoint[i]!]!;
-    const fB = this.factor[this.firstPoint[i]! + this.pointCount[i]! - 1]!;
+    const fB = this.factorBelow[this.firstPoint[i]! + this.pointCount[i]! - 1]!;
     const fSlope = span > 0 ? (fB - fA) / span : 0;
     let area = 0;
     let mz = 0;
