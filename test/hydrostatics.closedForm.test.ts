@@ -219,6 +219,29 @@ describe('wedge in plan', () => {
     });
   });
 
+  test('given in the points form with its flat of bottom drawn out, the wedge has the same exact particulars', () => {
+    // Each station as points: the centreline at the keel, the bilge corner (a knuckle),
+    // then up the side; the apex station, of no width, as its side alone. The flat is
+    // level, so it must count at its plan area, and the sides along their slope, as in
+    // the grid form above.
+    const xs = linspace(0, L, 11);
+    const zs = linspace(0, D, 7);
+    const points = {
+      name: 'wedge, points form',
+      stations: xs.map((x) => {
+        const y = (B / 2) * (x / L);
+        const side = zs.map((z, k) => ({ y, z, knuckle: k === 0 }));
+        return { x, points: y > 0 ? [{ y: 0, z: 0, knuckle: false }, ...side] : side };
+      }),
+    };
+    const grid = tableAt(hull, drafts, SEA_WATER_DENSITY);
+    tableAt(points, drafts, SEA_WATER_DENSITY).forEach((row, k) => {
+      const T = drafts[k]!;
+      expect(row.wettedSurface, `wetted surface at ${T}`).toBeRelClose((B * L) / 2 + 2 * T * Math.hypot(L, B / 2) + B * T, EXACT);
+      expectFieldsRelClose(row, grid[k]!, EXACT);
+    });
+  });
+
   test("the wedge's sides are counted along their slope, not as if square to the sections", () => {
     // The other side of the check above: the girth method alone (sides L T each) would
     // fall short by 2 T (sqrt(L^2 + B^2/4) - L), here 0.41 m^2 at T = 2.
