@@ -3,6 +3,7 @@
  * `inject`; server/main.ts listens).
  */
 import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import { AnswerCache } from './answerCache.js';
 import type { ServiceContext } from './context.js';
 import { buildOpenapi } from './openapi.js';
 import { OneLinePerRequest } from './plugins/requestLog.js';
@@ -47,7 +48,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     frameworkErrors: frameworkProblem,
   });
   const cache = new PreparedCache(store, SERVICE_LIMITS.preparedCacheSize);
-  const ctx: ServiceContext = { store, cache, openapi: buildOpenapi(ALL_ROUTES) };
+  const ctx: ServiceContext = { store, cache, answers: new AnswerCache(SERVICE_LIMITS.answerCacheChars), openapi: buildOpenapi(ALL_ROUTES) };
 
   registerProblemHandler(app);
   registerUploadBody(app);

@@ -24,6 +24,10 @@ export class Lru<K, V> {
     while (this.map.size > this.capacity) this.map.delete(this.map.keys().next().value as K);
   }
 
+  delete(key: K): void {
+    this.map.delete(key);
+  }
+
   /** Drop every entry whose key passes `test`. */
   deleteWhere(test: (key: K) => boolean): void {
     for (const k of [...this.map.keys()]) if (test(k)) this.map.delete(k);

@@ -21,6 +21,7 @@ import { HullStore, newHullId, sha256, STORE_FILE, type NewHull } from '../serve
 import { MIGRATIONS, SCHEMA_VERSION, migrate, schemaVersion } from '../server/store/migrations.js';
 import { boxBarge } from './fixtures/hulls.js';
 import { boxCsv } from './fixtures/serverHelpers.js';
+import './helpers/relClose.js';
 
 const dirs: string[] = [];
 const tempDir = (): string => {
@@ -206,5 +207,37 @@ describe('the caches', () => {
 
   test('the store types what it returns', () => {
     expectTypeOf<ReturnType<HullStore['get']>>().toEqualTypeOf<import('../server/store/hullStore.js').StoredHull | undefined>();
+  });
+});
+
+describe('the answer cache', () => {
+  test('keeps answers by tag, drops the least recently used past its size, and refuses one too big to keep', async () => {
+    const { AnswerCache } = await import('../server/answerCache.js');
+    const cache = new AnswerCache(100);
+    cache.set('a', { mediaType: 'text/csv', body: 'x'.repeat(20) });
+    cache.set('b', { mediaType: 'text/csv', body: 'y'.repeat(20) });
+    expect(cache.get('a')?.body).toBe('x'.repeat(20));
+    cache.set('c', { mediaType: 'text/csv', body: 'z'.repeat(24) });
+    cache.set('d', { mediaType: 'text/csv', body: 'w'.repeat(24) });
+    cache.set('e', { mediaType: 'text/csv', body: 'v'.repeat(24) });
+    // 20 + 20 + 24 + 24 + 24 > 100: b, used longest ago, goes first.
+    expect(cache.get('b')).toBeUndefined();
+    expect(cache.get('a')).toBeDefined();
+    cache.set('huge', { mediaType: 'text/csv', body: 'h'.repeat(26) });
+    expect(cache.get('huge')).toBeUndefined();
+  });
+
+  test('a replaced hull is not answered from the cache', async () => {
+    const { buildApp } = await import('../server/app.js');
+    const app = await buildApp();
+    const created = JSON.parse((await app.inject({ method: 'POST', url: '/v1/hulls', headers: { 'content-type': 'text/csv' }, payload: boxCsv('cached', 10, 4, 2) })).body);
+    const url = `/v1/hulls/${created.id}/hydrostatics?drafts=1`;
+    const first = JSON.parse((await app.inject({ method: 'GET', url })).body);
+    expect(JSON.parse((await app.inject({ method: 'GET', url })).body)).toEqual(first);
+    await app.inject({ method: 'PUT', url: `/v1/hulls/${created.id}`, headers: { 'content-type': 'text/csv' }, payload: boxCsv('cached', 20, 4, 2) });
+    const after = JSON.parse((await app.inject({ method: 'GET', url })).body);
+    // A box of twice the length displaces twice the volume (V = L B T).
+    expect(after.rows[0].volume).toBeRelClose(2 * first.rows[0].volume, 1e-12);
+    await app.close();
   });
 });

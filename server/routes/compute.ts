@@ -13,7 +13,7 @@ import { chooseFormat } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, type Format } from '../requestFields.js';
 import { parseOrFail, requireObject } from '../validate.js';
-import { sendResult } from './answer.js';
+import { renderResult, sendAnswer, sendResult } from './answer.js';
 import type { RouteSpec } from './routeSpec.js';
 import { requireHullMeta } from './storedHull.js';
 
@@ -97,8 +97,12 @@ function getRoute(c: AnyComputation): RouteSpec {
       const format = chooseFormat(req, q.format as Format | undefined, formatsOf(c));
       const etag = etagOf([meta.hash, meta.name, c.name, c.key(q), format]);
       if (answerNotModified(req, reply, etag)) return reply;
-      const result = c.run(ctx.cache.get(meta), q);
-      return sendResult(reply, c, result, format, `${meta.id}-${c.name}`);
+      let answer = ctx.answers.get(etag);
+      if (answer === undefined) {
+        answer = renderResult(c, c.run(ctx.cache.get(meta), q), format, `${meta.id}-${c.name}`);
+        ctx.answers.set(etag, answer);
+      }
+      return sendAnswer(reply, answer);
     },
   };
 }

@@ -6,7 +6,8 @@ import type { FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
 import { CAUTION } from '../../core/caution.js';
 import { fail } from '../../core/errors.js';
-import { hullSummary, toJson } from '../../core/formatHydrostatics.js';
+import { hullSummary } from '../../core/formatHydrostatics.js';
+import { jsonText } from '../jsonText.js';
 import { LengthUnitSchema } from '../../core/units.js';
 import { writeOffsetsCsv } from '../../core/writeOffsets.js';
 import type { ServiceContext } from '../context.js';
@@ -81,7 +82,7 @@ function record(meta: HullMeta, hull: NewHull['model']): z.infer<typeof HullReco
   };
 }
 
-const sendJson = (reply: FastifyReply, value: unknown): FastifyReply => reply.type(JSON_MEDIA_TYPE).send(toJson(value));
+const sendJson = (reply: FastifyReply, value: unknown): FastifyReply => reply.type(JSON_MEDIA_TYPE).send(jsonText(value));
 
 function create(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
   const h = uploadedHull(req);

@@ -8,12 +8,17 @@
  *
  * better-sqlite3 is synchronous: a request's reads and writes cannot interleave with
  * another's, which keeps each handler's view of a hull consistent without locks.
+ *
+ * One process owns the file: it keeps the metadata of recently used hulls in memory
+ * (every lookup of a computation would otherwise be a query), updated by its own
+ * writes. Another process may read the file, but must not write it while the service runs.
  */
 import { createHash, randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import type { HullModel } from '../../core/hullModel.js';
+import { Lru } from '../lru.js';
 import { migrate } from './migrations.js';
 
 /** How the offsets arrived: a CSV file in one of its forms, or a JSON model. */
@@ -50,6 +55,9 @@ export interface StoredHull extends HullMeta {
 }
 
 export const STORE_FILE = 'hulls.sqlite3';
+
+/** Hull metadata kept in memory, most recently used. */
+const META_CACHE_SIZE = 1024;
 
 export function sha256(bytes: Buffer | string): string {
   return createHash('sha256').update(bytes).digest('hex');
@@ -91,6 +99,7 @@ const toMeta = (r: MetaRow): HullMeta => ({
 export class HullStore {
   private readonly db: Database.Database;
   private readonly stmt;
+  private readonly metaCache = new Lru<string, HullMeta>(META_CACHE_SIZE);
 
   /** Open (creating if need be) the store in `dataDir`, or in memory for ':memory:'. */
   static open(dataDir: string): HullStore {
@@ -143,23 +152,32 @@ export class HullStore {
   create(h: NewHull, id: string = newHullId()): HullMeta {
     const now = new Date().toISOString();
     this.db.transaction(() => this.stmt.insert.run({ ...this.row(id, h, now), created: now }))();
+    this.metaCache.delete(id);
     return this.meta(id)!;
   }
 
   /** Replace a stored hull, keeping its id and creation time; undefined when there is none. */
   replace(id: string, h: NewHull): HullMeta | undefined {
     const changed = this.db.transaction(() => this.stmt.update.run(this.row(id, h, new Date().toISOString())).changes)();
+    this.metaCache.delete(id);
     return changed === 0 ? undefined : this.meta(id);
   }
 
   /** Remove a hull; false when there was none. */
   delete(id: string): boolean {
-    return this.db.transaction(() => this.stmt.remove.run(id).changes)() > 0;
+    const removed = this.db.transaction(() => this.stmt.remove.run(id).changes)() > 0;
+    this.metaCache.delete(id);
+    return removed;
   }
 
   meta(id: string): HullMeta | undefined {
+    const cached = this.metaCache.get(id);
+    if (cached !== undefined) return cached;
     const r = this.stmt.meta.get(id);
-    return r === undefined ? undefined : toMeta(r);
+    if (r === undefined) return undefined;
+    const m = toMeta(r);
+    this.metaCache.set(id, m);
+    return m;
   }
 
   get(id: string): StoredHull | undefined {
