@@ -18,6 +18,7 @@ import type { HydrostaticRow } from '../core/hydrostaticFields.js';
 import { hydrostaticTable } from '../core/hydrostatics.js';
 import { prepareHull } from '../core/preparedHull.js';
 import { readOffsetsCsv } from '../core/readOffsets.js';
+import { COMMANDS } from '../cli/commands/index.js';
 import type { CliIo } from '../cli/io.js';
 import { main } from '../cli/main.js';
 
@@ -299,7 +300,7 @@ describe('bad input', () => {
     [['hydrostatics', WORKBOAT, '--drafts', '1', '--format', 'xml'], /--format 'xml' is not one of table, csv, json/],
     [['check', WORKBOAT, '--format', 'csv'], /--format 'csv' is not one of table, json/],
     [['hydrostatics', 'no-such-file.csv', '--drafts', '1'], /^no-such-file\.csv: cannot be read: no such file/m],
-    [['frobnicate'], /unknown command 'frobnicate'; the commands are hydrostatics, check/],
+    [['frobnicate'], /unknown command 'frobnicate'; the commands are .*hydrostatics.*check/],
     [['--frob'], /unknown option --frob/],
     [[], /no command given/],
   ])('%j is bad input, exit 2', async (argv, why) => {
@@ -307,6 +308,11 @@ describe('bad input', () => {
     expect(r.code).toBe(2);
     expect(r.out).toBe('');
     expect(r.err).toMatch(why);
+  });
+
+  test('an unknown command is answered with the list of every command', async () => {
+    const r = await run(['frobnicate']);
+    for (const c of COMMANDS) expect(r.err).toContain(c.name);
   });
 
   test('a file that is not UTF-8 is reported, not read', async () => {
