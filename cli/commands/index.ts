@@ -3,10 +3,13 @@
  * a file beside this one exporting a Command (cli/command.ts), added to this list.
  */
 import type { Command } from '../command.js';
+import { areas } from './areas.js';
+import { bonjean } from './bonjean.js';
 import { check } from './check.js';
 import { hydrostatics } from './hydrostatics.js';
+import { sheet } from './sheet.js';
 
-export const COMMANDS: readonly Command[] = [hydrostatics, check];
+export const COMMANDS: readonly Command[] = [hydrostatics, sheet, bonjean, areas, check];
 
 export function findCommand(name: string): Command | undefined {
   return COMMANDS.find((c) => c.name === name);

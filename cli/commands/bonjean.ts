@@ -1,0 +1,69 @@
+/**
+ * `halfbreadth bonjean <file|-> [--drafts <list>]`: the Bonjean data of every station
+ * (immersed area and its moment against height), as a text table, CSV or JSON. Thin:
+ * the data and its forms come from core/bonjean.ts and core/formatBonjean.ts.
+ */
+import type { Issue } from '../../core/errors.js';
+import { bonjean as bonjeanData } from '../../core/bonjean.js';
+import { parseDraftList } from '../../core/draftList.js';
+import { bonjeanCsv, bonjeanResult, bonjeanText } from '../../core/formatBonjean.js';
+import { toJson } from '../../core/formatHydrostatics.js';
+import { prepareHull } from '../../core/preparedHull.js';
+import { readOffsetsCsv } from '../../core/readOffsets.js';
+import { attempt, attemptAsync, throwIfAny } from '../collect.js';
+import type { Command, CommandArgs } from '../command.js';
+import { EXIT } from '../command.js';
+import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
+
+const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
+
+export const bonjean: Command = {
+  name: 'bonjean',
+  summary: 'Bonjean data: the immersed area of every station against height',
+  synopsis: 'bonjean <file|-> [--drafts <list>] [--format table|csv|json]',
+  positionals: ['<file|->'],
+  options: {
+    drafts: { type: 'string', example: '--drafts 1.3,1.45' },
+    format: { type: 'string', example: '--format csv' },
+  },
+  help: `The Bonjean data of the hull: for every station, the immersed area of its
+section (both sides) and the moment of that area about the baseline, from the
+station's keel (area 0) through every tabulated waterline above the keel up to
+its deck edge, and at any extra heights asked for. A points-form table has no
+tabulated waterlines: each station's own point heights are used.
+
+Arguments:
+  <file|->            offsets CSV, grid or points form; - reads standard input
+
+Options:
+  --drafts <list>     extra heights in metres, values and ranges from:step:to,
+                      e.g. 1.3,1.45 or 0.1:0.1:2; each must meet some station
+  --format <form>     table, csv or json (default: table on a terminal, csv when
+                      piped or redirected)
+  -h, --help          this help
+
+Forms:
+  table   areas in m2, stations down and heights across
+  csv     x_m, z_m, area_m2, momentZ_m3: one row per station and height
+  json    { "hull", "caution", "stations": [ { "x", "keel", "deck",
+          "points": [ { "z", "area", "momentZ" } ] } ] }
+
+Every form carries the caution. Exit status: 0 done; 2 bad input.
+
+Example:
+  halfbreadth bonjean offsets-demo/workboat.csv --drafts 1.3 --format csv`,
+  async run(args: CommandArgs, io: CliIo): Promise<number> {
+    const issues: Issue[] = [];
+    const { values } = args;
+    const format = attempt(() => chooseFormat(str(values['format']), ['table', 'csv', 'json'], 'csv', io.stdout), issues);
+    const text = str(values['drafts']);
+    const extra = text === undefined ? [] : attempt(() => parseDraftList(text), issues);
+    const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
+    const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
+    throwIfAny(issues);
+    const { hull } = read!;
+    const result = bonjeanResult(hull, bonjeanData(prepareHull(hull), extra!));
+    io.stdout.write(format === 'json' ? toJson(result) + '\n' : format === 'csv' ? bonjeanCsv(result) : terminalSafe(bonjeanText(result)));
+    return EXIT.ok;
+  },
+};
