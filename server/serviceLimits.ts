@@ -16,7 +16,7 @@ export const SERVICE_LIMITS = {
   /** Prepared hulls kept in memory (least recently used go first). */
   preparedCacheSize: 32,
   /** Characters of computed answers kept for repeated requests. */
-  answerCacheChars: 32 * 1024 * 1024,
+  answerCacheChars: 8 * 1024 * 1024,
   /** Longest drafts text in a query, characters. */
   maxDraftsText: 20_000,
   /** Longest hull id, characters (ids are 16 url-safe characters; demo hulls have readable ones). */

@@ -91,6 +91,13 @@ describe('problem codes and statuses', () => {
     for (const c of PROBLEM_CODES) expect([400, 404, 405, 406, 413, 415, 422, 500]).toContain(STATUS_OF_CODE[c]);
   });
 
+  test('docs/api.md lists every code with its type and status', () => {
+    const doc = readFileSync(new URL('../docs/api.md', import.meta.url), 'utf8');
+    const listed = new Map([...doc.matchAll(/^\|\s*`(HYD_[A-Z_]+)`\s*\|\s*`([^`]+)`\s*\|\s*(\d{3})\s*\|/gm)].map((m) => [m[1]!, [m[2]!, Number(m[3])]] as const));
+    expect([...listed.keys()].sort()).toEqual([...PROBLEM_CODES].sort());
+    for (const c of PROBLEM_CODES) expect(listed.get(c), c).toEqual([`/problems/${problemSlug(c)}`, STATUS_OF_CODE[c]]);
+  });
+
   test('the statuses agree with docs/errors.md', () => {
     const doc = readFileSync(new URL('../docs/errors.md', import.meta.url), 'utf8');
     const listed = [...doc.matchAll(/^\|\s*`(HYD_[A-Z_]+)`\s*\|.*\|\s*(\d{3})\s*\|\s*$/gm)].map((m) => [m[1]!, Number(m[2])] as const);
