@@ -8,7 +8,10 @@ import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/constants.js'
 import { checkDensity } from '../../core/density.js';
 import { parseDraftList } from '../../core/draftList.js';
 import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/formatHydrostatics.js';
+import { errorEstimates } from '../../core/errorEstimate.js';
 import { hydrostaticTable } from '../../core/hydrostatics.js';
+import { hydrostaticsReport, reportCsv, reportText, type UnitSystem } from '../../core/hydrostaticsReport.js';
+import { IMPERIAL_FACTORS } from '../../core/imperial.js';
 import { prepareHull } from '../../core/preparedHull.js';
 import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
@@ -32,6 +35,13 @@ export function densityOption(values: CommandArgs['values']): number {
   return checkDensity(value, ['density'], text);
 }
 
+/** The unit system of --units: si (the default) or imperial. */
+export function unitsOption(text: string | undefined): UnitSystem {
+  if (text === undefined || text === 'si') return 'si';
+  if (text === 'imperial') return 'imperial';
+  throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['--units'], `--units '${text.slice(0, 40)}' is not one of si, imperial`)]);
+}
+
 export const hydrostatics: Command = {
   name: 'hydrostatics',
   summary: 'the upright hydrostatic table of a hull at a list of drafts',
@@ -42,6 +52,8 @@ export const hydrostatics: Command = {
     density: { type: 'string', example: '--density 1.025' },
     fresh: { type: 'boolean' },
     format: { type: 'string', example: '--format csv' },
+    units: { type: 'string', example: '--units imperial' },
+    'error-estimate': { type: 'boolean' },
   },
   help: `The upright, level hydrostatic particulars of the hull in an offsets file
 at each draft of a list: volume, displacement, LCB, VCB (KB), waterplane area,
@@ -59,6 +71,14 @@ Options:
   --fresh             fresh water: density 1.000
   --format <form>     table, csv or json (default: table on a terminal, csv when
                       the output is piped or redirected to a file)
+  --units <system>    si (default) or imperial: feet, long tons, TPI (long tons
+                      per inch) and MTI (long ton-feet per inch); with imperial
+                      the drafts are given in feet
+  --error-estimate    add to each row an estimate of the integration error of
+                      volume, LCB, VCB, waterplane area and BMt (exact minus
+                      computed), by halving the stations and waterlines and
+                      Richardson's rule for Simpson's h^4; it assumes a smooth
+                      hull and is marked when a count does not halve cleanly
   -h, --help          this help
 
 Forms:
@@ -67,7 +87,9 @@ Forms:
           tpc_t_per_cm); leading # lines give the caution, the hull and the
           density
   json    { "hull": {...}, "density": ..., "caution": "...", "rows": [...] },
-          one row object per draft; a coefficient that is undefined is null
+          one row object per draft; a coefficient that is undefined is null;
+          with --units or --error-estimate, also "units" and "fields" (each
+          field's key and unit), and each row's "errorEstimate" when asked for
 
 Every form carries the caution. Exit status: 0 done; 2 bad input, with every
 problem of the file, the drafts and the options listed on stderr.
@@ -81,11 +103,22 @@ Example:
     const format = attempt(() => chooseFormat(str(values['format']), ['table', 'csv', 'json'], 'csv', io.stdout), issues);
     const drafts = attempt(() => parseDraftList(str(values['drafts']) ?? ''), issues);
     const density = attempt(() => densityOption(values), issues);
+    const units = attempt(() => unitsOption(str(values['units'])), issues);
     const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
     const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
     throwIfAny(issues);
     const { hull } = read!;
-    const rows = hydrostaticTable(prepareHull(hull), drafts!, density!);
+    const prepared = prepareHull(hull);
+    if (units !== 'si' || values['error-estimate'] === true) {
+      // Drafts are typed in feet when the table is asked for in imperial units.
+      const metres = units === 'imperial' ? drafts!.map((d) => d * IMPERIAL_FACTORS.metresPerFoot) : drafts!;
+      const rows = hydrostaticTable(prepared, metres, density!);
+      const errorEstimate = values['error-estimate'] === true ? errorEstimates(prepared, metres, density!) : undefined;
+      const report = hydrostaticsReport(hull, density!, rows, { units: units!, ...(errorEstimate === undefined ? {} : { errorEstimate }) });
+      io.stdout.write(format === 'json' ? toJson(report) + '\n' : format === 'csv' ? reportCsv(report) : terminalSafe(reportText(report)));
+      return EXIT.ok;
+    }
+    const rows = hydrostaticTable(prepared, drafts!, density!);
     const result = hydrostaticResult(hull, density!, rows);
     const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : terminalSafe(hydrostaticsText(result));
     io.stdout.write(text);
