@@ -5,6 +5,7 @@
  */
 import { CAUTION } from '../../core/caution.js';
 import { HalfbreadthError, type Issue } from '../../core/errors.js';
+import { fairnessWarnings } from '../../core/fairness.js';
 import type { HullModel } from '../../core/hullModel.js';
 import { prepareHull } from '../../core/preparedHull.js';
 import { readOffsetsCsv, type ReadResult } from '../../core/readOffsets.js';
@@ -22,11 +23,10 @@ export interface Warning {
 }
 
 /**
- * The checks that find warnings in a hull that reads without error. None yet: the
- * fairness check of the offsets joins this list when the core has it, and its findings
- * then show in every form of `check` without further change here.
+ * The checks that find warnings in a hull that reads without error: the fairness of the
+ * offsets (core/fairness.ts; each warning also gives x, z, value and a suggested value).
  */
-export const WARNING_CHECKS: readonly ((hull: HullModel) => readonly Warning[])[] = [];
+export const WARNING_CHECKS: readonly ((hull: HullModel) => readonly Warning[])[] = [fairnessWarnings];
 
 /** What `check` reports of a sound file. Lengths in metres, whatever the file's units. */
 export interface Particulars {
@@ -123,7 +123,9 @@ Forms:
   table   the particulars as lines on stdout; errors and warnings on stderr
   json    { "errors": [...], "warnings": [...], "particulars": {...} | null,
           "caution": "..." } on stdout; each error is { code, path, message };
-          the errors are also printed on stderr
+          each warning { code, path, x, z, value, suggested, message }: an
+          offset that is not fair along its waterline or section, with a fair
+          value from its neighbours; errors and warnings also go to stderr
 
 Exit status: 0 when the file reads without error, 2 when it has errors.`,
   async run(args: CommandArgs, io: CliIo): Promise<number> {
