@@ -30,9 +30,11 @@ function demoDir(): string | undefined {
   return undefined;
 }
 
-const app = await buildApp({
-  dataDir: process.env.HALFBREADTH_DATA ?? './data',
-  logger: { level: process.env.HALFBREADTH_LOG_LEVEL ?? 'info' },
+const dataDir = process.env.HALFBREADTH_DATA ?? './data';
+const app = await buildApp({ dataDir, logger: { level: process.env.HALFBREADTH_LOG_LEVEL ?? 'info' } }).catch((e: unknown) => {
+  // A store that cannot be opened (no permission, a newer schema) is a reason not to start, said plainly.
+  process.stderr.write(`cannot open the hull store in ${dataDir}: ${e instanceof Error ? e.message : String(e)}\n`);
+  process.exit(1);
 });
 
 const demo = demoDir();
