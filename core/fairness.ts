@@ -97,12 +97,13 @@ interface Prediction {
   roughness: number;
 }
 
-/** The divided difference of `v` over the points `idx` (Newton's, any spacing). */
-function dividedDifference(s: readonly number[], v: readonly number[], idx: readonly number[]): number {
+/** The divided difference of `v` over the points idx[from .. from + count - 1] (Newton's, any spacing). */
+function dividedDifference(s: readonly number[], v: readonly number[], idx: readonly number[], from: number, count: number): number {
   let dd = 0;
-  for (const j of idx) {
+  for (let a = from; a < from + count; a++) {
+    const j = idx[a]!;
     let denom = 1;
-    for (const m of idx) if (m !== j) denom *= s[j]! - s[m]!;
+    for (let b = from; b < from + count; b++) if (b !== a) denom *= s[j]! - s[idx[b]!]!;
     dd += v[j]! / denom;
   }
   return dd;
@@ -118,11 +119,9 @@ function dividedDifference(s: readonly number[], v: readonly number[], idx: read
 function predict(s: readonly number[], v: readonly number[], k: number, degree: number): Prediction {
   const n = s.length;
   const idx: number[] = [];
-  for (let step = 1; idx.length < degree + 1 && step < n; step++) {
-    if (k - step >= 0) idx.push(k - step);
-    if (idx.length < degree + 1 && k + step < n) idx.push(k + step);
-  }
-  idx.sort((a, b) => a - b);
+  // The nearest degree + 1 others, in order: as many before k as after, shifted at the ends.
+  const before = Math.min(k, Math.max(Math.ceil((degree + 1) / 2), degree + 1 - (n - 1 - k)));
+  for (let j = k - before; idx.length < degree + 1; j++) if (j !== k) idx.push(j);
   let value = 0;
   let sq = 0;
   for (const j of idx) {
@@ -144,7 +143,7 @@ function predict(s: readonly number[], v: readonly number[], k: number, degree: 
   const lo = Math.max(0, Math.min(at - size + 1, others.length - size));
   const hi = Math.max(lo, Math.min(at - 1, others.length - size));
   let dd = 0;
-  for (let a = lo; a <= hi; a++) dd = Math.max(dd, Math.abs(dividedDifference(s, v, others.slice(a, a + size))));
+  for (let a = lo; a <= hi; a++) dd = Math.max(dd, Math.abs(dividedDifference(s, v, others, a, size)));
   let span = 1;
   for (const j of idx) span *= Math.abs(s[k]! - s[j]!);
   const roughness = dd * span;
@@ -255,12 +254,10 @@ function lineCurves(hull: HullModel): Curve[] {
     at,
   });
   if (hull.waterlines !== undefined) {
+    // Each station's points by height, found once (a grid has one point per defined cell).
+    const byHeight = hull.stations.map((st) => new Map(st.points.map((q, j) => [q.z, j] as const)));
     for (const z of hull.waterlines) {
-      const at = (i: number): number | undefined => {
-        const pts = hull.stations[i]?.points;
-        const j = pts === undefined ? -1 : pts.findIndex((q) => q.z === z);
-        return j < 0 ? undefined : j;
-      };
+      const at = (i: number): number | undefined => byHeight[i]?.get(z);
       // Where a waterline meets the keel or the deck edge between two stations (its lowest or
       // highest offset at one, an ordinary one at the next) it ends at the profile: that
       // offset is the flat of keel or the deck, not a point of the waterline's curve.
@@ -307,21 +304,29 @@ export function fairnessWarnings(hull: HullModel): FairnessWarning[] {
   let size = 0;
   for (const st of hull.stations) for (const q of st.points) size = Math.max(size, q.y);
   if (!(size > 0)) return [];
-  const byPlace = new Map<string, { station: number; point: number; coordinate: 'y' | 'z'; value: number; suggested: number; ratio: number; along: Set<Curve['along']> }>();
+  const byPlace = new Map<number, { station: number; point: number; coordinate: 'y' | 'z'; value: number; suggested: number; ratio: number; along: Set<Curve['along']> }>();
   // The smallest unfairness ratio each offset shows on a line that judges it (interior) and does not accuse it.
-  const clearest = new Map<string, number>();
+  // Indexed by place: (first point of the station + point) x 2 + (0 for y, 1 for z).
+  const base: number[] = [];
+  let total = 0;
+  for (const st of hull.stations) {
+    base.push(total);
+    total += st.points.length;
+  }
+  const place = (at: CurvePoint, coordinate: 'y' | 'z'): number => (base[at.station]! + at.point) * 2 + (coordinate === 'z' ? 1 : 0);
+  const clearest = new Float64Array(2 * total).fill(Number.POSITIVE_INFINITY);
   for (const curve of [...lineCurves(hull), ...sectionCurves(hull)]) {
     const { found, first } = checkCurve(curve, size);
     const accused = new Set(found.map((f) => f.index));
     first.forEach((r, k) => {
       if (Number.isNaN(r) || accused.has(k)) return;
       const at = curve.at[k]!;
-      const key = `${at.station}/${at.point}/${curve.coordinate}`;
-      clearest.set(key, Math.min(r, clearest.get(key) ?? Number.POSITIVE_INFINITY));
+      const key = place(at, curve.coordinate);
+      clearest[key] = Math.min(r, clearest[key]!);
     });
     for (const f of found) {
       const at = curve.at[f.index]!;
-      const key = `${at.station}/${at.point}/${curve.coordinate}`;
+      const key = place(at, curve.coordinate);
       const seen = byPlace.get(key);
       if (seen === undefined) {
         byPlace.set(key, { ...at, coordinate: curve.coordinate, value: f.value, suggested: f.suggested, ratio: f.ratio, along: new Set([curve.along]) });
@@ -334,7 +339,7 @@ export function fairnessWarnings(hull: HullModel): FairnessWarning[] {
   }
   // An offset that another line through it shows clearly fair was blamed for a neighbour's
   // fault (a short line cannot always tell which of its offsets is wrong): it is not reported.
-  for (const [key, w] of byPlace) if ((clearest.get(key) ?? Number.POSITIVE_INFINITY) < FAIRNESS_TOLERANCE.clearlyFair && w.along.size === 1) byPlace.delete(key);
+  for (const [key, w] of byPlace) if (clearest[key]! < FAIRNESS_TOLERANCE.clearlyFair && w.along.size === 1) byPlace.delete(key);
   const out = [...byPlace.values()].sort((a, b) => a.station - b.station || a.point - b.point || a.coordinate.localeCompare(b.coordinate));
   return out.map((w) => {
     const st = hull.stations[w.station]!;
