@@ -162,8 +162,23 @@ describe('POST /v1/check', () => {
       // 11 stations x 5 waterlines; the box's keel is the baseline and its deck edge is at D = 2 m.
       particulars: { form: 'grid', units: 'm', points: 55, knuckles: 0, lowestKeel: 0, lowestDeck: 2 },
       issues: [],
+      // Constant offsets make straight lines: nothing to call unfair (common practice, no source).
+      warnings: [],
       caution: CAUTION,
     });
+  });
+
+  test('one offset pushed out of a fair line is a warning, with its place and the fair value', async () => {
+    // Station x = 5 m (line 9), waterline z = 1 m (column 4): half-breadth 2 m pushed out to 2.3 m.
+    const bumped = BOX.replace('\n5,2,2,2,2,2\n', '\n5,2,2,2.3,2,2\n');
+    const res = await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: bumped });
+    const body = JSON.parse(res.body);
+    expect(body.valid).toBe(true);
+    expect(body.warnings).toHaveLength(1);
+    const w = body.warnings[0];
+    expect(w).toMatchObject({ code: 'HYD_UNFAIR_OFFSET', path: ['stations', 5, 'points', 2, 'y'], x: 5, z: 1, offset: 'halfBreadth', value: 2.3 });
+    // Its neighbours along the waterline and the section all lie at 2 m: the fair value is 2 m.
+    expect(w.suggested).toBeRelClose(2, 1e-9);
   });
 
   test('broken offsets are an answer, not a failure: every issue with its line and column', async () => {
@@ -174,6 +189,7 @@ describe('POST /v1/check', () => {
     expect(body.valid).toBe(false);
     expect(body.hull).toBeNull();
     expect(body.particulars).toBeNull();
+    expect(body.warnings).toEqual([]);
     expect(body.caution).toBe(CAUTION);
     // Lines: 1 name, 2 units, 3 header, 4 station x = 0, 5 x = 1, 7 x = 3; column 3 is z = 0.5, column 4 z = 1.
     expect(body.issues.map((i: { code: string; path: unknown[] }) => [i.code, i.path])).toEqual([
@@ -330,6 +346,8 @@ describe('computations on a stored hull', () => {
       hull: boxHull,
       particulars: { form: 'grid', units: 'm', points: 55, knuckles: 0, lowestKeel: 0, lowestDeck: 2 },
       issues: [],
+      // Constant offsets make straight lines: nothing to call unfair (common practice, no source).
+      warnings: [],
       caution: CAUTION,
     });
   });

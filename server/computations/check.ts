@@ -1,11 +1,13 @@
 /**
- * Checking offsets: whether they make a sound hull, every issue if not, and what the
- * hull is (stations, perpendiculars, the range of drafts it can be floated at). Offsets
- * that break a rule are an answer here (valid: false), not a failure.
+ * Checking offsets: whether they make a sound hull, every issue if not, what the hull
+ * is (stations, perpendiculars, the range of drafts it can be floated at), and the
+ * offsets that look unfair (core/fairness.ts), as warnings. Offsets that break a rule
+ * are an answer here (valid: false), not a failure.
  */
 import { z } from 'zod';
 import { CAUTION } from '../../core/caution.js';
 import type { HalfbreadthError } from '../../core/errors.js';
+import { fairnessWarnings, type FairnessWarning } from '../../core/fairness.js';
 import { hullSummary, type HullSummary } from '../../core/formatHydrostatics.js';
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
@@ -20,12 +22,27 @@ const ParticularsSchema = z.object({
   lowestDeck: z.number().describe('z of the lowest deck edge, m: drafts may not lie above it'),
 });
 
+const WarningSchema = z
+  .object({
+    code: z.literal('HYD_UNFAIR_OFFSET'),
+    path: z.array(z.union([z.string(), z.number()])).describe('where in the hull model'),
+    x: z.number().describe('station position, m'),
+    z: z.number().describe('height of the offset, m'),
+    offset: z.enum(['halfBreadth', 'height']).describe('which coordinate looks unfair'),
+    value: z.number().describe('the offset as given, m'),
+    suggested: z.number().describe('a fair value from its neighbours, m'),
+    along: z.array(z.enum(['waterline', 'section', 'line'])).describe('the lines along which it was found'),
+    message: z.string(),
+  })
+  .describe('an offset that makes a bump or a hollow in its waterline or section: a warning, not an error');
+
 export const CheckResultSchema = z
   .object({
     valid: z.boolean(),
     hull: HullSummarySchema.nullable(),
     particulars: ParticularsSchema.nullable(),
     issues: z.array(z.object({ code: z.string(), path: z.array(z.union([z.string(), z.number()])), message: z.string() })),
+    warnings: z.array(WarningSchema).describe('offsets that look unfair (none when the offsets are not valid)'),
     caution: CautionField,
   })
   .describe('whether the offsets make a sound hull, and what it is');
@@ -35,6 +52,7 @@ interface CheckResult {
   hull: HullSummary | null;
   particulars: z.infer<typeof ParticularsSchema> | null;
   issues: { code: string; path: (string | number)[]; message: string }[];
+  warnings: readonly FairnessWarning[];
   caution: string;
 }
 
@@ -51,17 +69,20 @@ function particulars(h: LoadedHull): z.infer<typeof ParticularsSchema> {
 export const check: Computation<Record<string, never>, CheckResult> = {
   name: 'check',
   summary: 'Check offsets',
-  description: 'Whether the offsets make a sound hull, with every issue (line and column, or field) when they do not, and the hull\'s particulars when they do.',
+  description:
+    'Whether the offsets make a sound hull, with every issue (line and column, or field) when they do not, and the hull\'s particulars ' +
+    'and any offsets that look unfair (warnings) when they do.',
   query: z.object({}),
   body: z.object({}),
   result: CheckResultSchema,
   key: () => '',
-  run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], caution: CAUTION }),
+  run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], warnings: fairnessWarnings(h.hull), caution: CAUTION }),
   invalid: (err: HalfbreadthError) => ({
     valid: false,
     hull: null,
     particulars: null,
     issues: err.issues.map((i) => ({ code: i.code, path: [...i.path], message: i.message })),
+    warnings: [],
     caution: CAUTION,
   }),
 };
