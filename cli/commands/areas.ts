@@ -20,7 +20,7 @@ const str = (v: string | boolean | undefined): string | undefined => (typeof v =
 export const areas: Command = {
   name: 'areas',
   summary: 'the curve of sectional areas at a draft, with the LCB marked',
-  synopsis: 'areas <file|-> --draft <m> [--format table|csv|json]',
+  synopsis: 'areas <file|-> --draft <m> [--format <form>]',
   positionals: ['<file|->'],
   options: {
     draft: { type: 'string', required: true, example: '--draft 1.3' },

@@ -20,7 +20,7 @@ const str = (v: string | boolean | undefined): string | undefined => (typeof v =
 export const bonjean: Command = {
   name: 'bonjean',
   summary: 'Bonjean data: the immersed area of every station against height',
-  synopsis: 'bonjean <file|-> [--drafts <list>] [--format table|csv|json]',
+  synopsis: 'bonjean <file|-> [--drafts <list>] [--format <form>]',
   positionals: ['<file|->'],
   options: {
     drafts: { type: 'string', example: '--drafts 1.3,1.45' },

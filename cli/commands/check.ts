@@ -103,14 +103,15 @@ export function particularsText(label: string, p: Particulars): string {
 
 export const check: Command = {
   name: 'check',
-  summary: 'validate an offsets file: its particulars, or every error',
+  summary: 'validate an offsets file: particulars, errors, unfair offsets',
   synopsis: 'check <file|-> [--format table|json]',
   positionals: ['<file|->'],
   options: { format: { type: 'string', example: '--format json' } },
   help: `Reads an offsets file and reports either what it holds (name, form,
 units, stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge
 heights, and the drafts a hydrostatic table of it may use) or every error
-found, each with its line and column.
+found, each with its line and column. It also warns of offsets that are not
+fair: a bump or hollow in a waterline or a section, with a fair value.
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input

@@ -20,8 +20,8 @@ const str = (v: string | boolean | undefined): string | undefined => (typeof v =
 
 export const sheet: Command = {
   name: 'sheet',
-  summary: "the calculation sheet at one draft: ordinates, Simpson's multipliers, products",
-  synopsis: 'sheet <file|-> --draft <m> [--density <t/m3> | --fresh] [--format table|csv|json]',
+  summary: "the calculation sheet at a draft, with Simpson's multipliers",
+  synopsis: 'sheet <file|-> --draft <m> [options]',
   positionals: ['<file|->'],
   options: {
     draft: { type: 'string', required: true, example: '--draft 1.3' },
