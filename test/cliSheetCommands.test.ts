@@ -38,6 +38,8 @@ async function run(argv: string[], files: Record<string, string> = {}): Promise<
 }
 
 const prepared = (file: string) => prepareHull(readOffsetsCsv(readFileSync(file, 'utf8')).hull);
+/** Twice the greatest half-breadth of a demo file, read from its cells. */
+const beamOf = (file: string): number => 2 * Math.max(...readOffsetsCsv(readFileSync(file, 'utf8')).hull.stations.flatMap((st) => st.points.map((q) => q.y)));
 const csvRows = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, comments: '#', skipEmptyLines: true }).data;
 
 describe('sheet', () => {
@@ -137,18 +139,21 @@ describe('check warns of unfair offsets', () => {
   });
 
   test('an offset moved by 2 % of the beam is warned of, with its place and a fair value; the file still reads', async () => {
-    // The workboat's half-breadth at x = 7 m, z = 1.25 m is 2.198 m; the beam is 4.6 m, so 2 % is 0.092 m.
-    const text = readFileSync(WORKBOAT, 'utf8').replace(/^7,(.*)$/m, (line) => {
-      const cells = line.split(',');
-      cells[7] = String(Number(cells[7]) + 0.092);
-      return cells.join(',');
-    });
+    // The workboat's half-breadth at x = 7 m on the 1.25 m waterline, moved out by 2 % of its beam.
+    const original = readFileSync(WORKBOAT, 'utf8');
+    const header = original.split(/\r?\n/).find((l) => l.startsWith('x,'))!.split(',');
+    const column = header.indexOf('1.25');
+    const row = original.split(/\r?\n/).find((l) => l.startsWith('7,'))!.split(',');
+    const was = Number(row[column]);
+    const move = 0.02 * beamOf(WORKBOAT);
+    row[column] = String(was + move);
+    const text = original.replace(/^7,.*$/m, row.join(','));
     const r = await run(['check', 'bumped.csv', '--format', 'json'], { 'bumped.csv': text });
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
     expect(j.warnings).toHaveLength(1);
-    expect(j.warnings[0]).toMatchObject({ x: 7, z: 1.25, value: 2.29 });
-    expect(Math.abs(j.warnings[0].suggested - 2.198)).toBeLessThan(0.023);
+    expect(j.warnings[0]).toMatchObject({ x: 7, z: 1.25, value: was + move });
+    expect(Math.abs(j.warnings[0].suggested - was)).toBeLessThan(0.25 * move);
     expect(r.err).toContain('bumped.csv: warning: station x = 7 m, z = 1.25 m');
   });
 });
