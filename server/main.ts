@@ -9,6 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { buildApp } from './app.js';
 import { preloadDemo } from './preloadDemo.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
+import { startBanner } from './startBanner.js';
 
 function port(text: string | undefined): number {
   if (text === undefined || text === '') return 3000;
@@ -38,8 +39,10 @@ const app = await buildApp({ dataDir, logger: { level: process.env.HALFBREADTH_L
 });
 
 const demo = demoDir();
+const demoIds: string[] = [];
 if (demo !== undefined) {
   for (const o of preloadDemo(app.halfbreadth.store, demo)) {
+    if (o.outcome !== 'unreadable') demoIds.push(o.id);
     if (o.outcome === 'unreadable') app.log.warn({ demo: o }, 'demo hull not loaded');
     else app.log.info({ demo: o }, 'demo hull');
   }
@@ -66,7 +69,8 @@ process.on('SIGTERM', () => void stop('SIGTERM'));
 process.on('SIGINT', () => void stop('SIGINT'));
 
 try {
-  await app.listen({ port: port(process.env.PORT), host: process.env.HOST ?? '127.0.0.1' });
+  const address = await app.listen({ port: port(process.env.PORT), host: process.env.HOST ?? '127.0.0.1' });
+  if (process.stderr.isTTY || process.env.HALFBREADTH_BANNER === '1') process.stderr.write(startBanner(app.halfbreadth.store, demoIds, address));
 } catch (e) {
   app.log.error({ err: e }, 'cannot listen');
   process.exit(1);
