@@ -12,7 +12,7 @@ import { ERROR_ESTIMATE_FIELDS, type ErrorEstimate, type Halving } from './error
 import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from './hydrostaticFields.js';
 import type { HullModel } from './hullModel.js';
-import { cubicFeetPerLongTon, IMPERIAL_FIELDS, IMPERIAL_UNITS } from './imperial.js';
+import { cubicFeetPerLongTon, IMPERIAL_FIELDS, IMPERIAL_UNITS, imperialRow } from './imperial.js';
 
 export type UnitSystem = 'si' | 'imperial';
 
@@ -63,8 +63,7 @@ export function hydrostaticsReport(hull: HullModel, density: number, rows: reado
   const len = options.units === 'si' ? 1 : IMPERIAL_UNITS['m']!.factor;
   const est = options.errorEstimate;
   const out = rows.map((row, i) => {
-    const r: ReportRow = {};
-    for (const f of fields) r[f.key] = row[f.from] * f.factor;
+    const r: ReportRow = options.units === 'si' ? { ...row } : imperialRow(row);
     if (est !== undefined) {
       const e: Record<string, number> = {};
       for (const q of ERROR_ESTIMATE_FIELDS) e[q.key] = est.estimates[i]![q.key] * estimateUnit(q.unit, options.units).factor;

@@ -70,6 +70,8 @@ export const IMPERIAL_FIELDS: readonly ImperialField[] = HYDROSTATIC_FIELDS.map(
 export function imperialRow(row: HydrostaticRow): Record<string, number> {
   const out: Record<string, number> = {};
   for (const f of IMPERIAL_FIELDS) out[f.key] = row[f.from] * f.factor;
+  // The draft was typed in feet: give it back as typed, not with the noise of the round trip through metres.
+  out['draft'] = Number(out['draft']!.toPrecision(12));
   return out;
 }
 

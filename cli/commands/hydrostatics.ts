@@ -10,8 +10,7 @@ import { parseDraftList } from '../../core/draftList.js';
 import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/formatHydrostatics.js';
 import { errorEstimates } from '../../core/errorEstimate.js';
 import { hydrostaticTable } from '../../core/hydrostatics.js';
-import { hydrostaticsReport, reportCsv, reportText, type UnitSystem } from '../../core/hydrostaticsReport.js';
-import { IMPERIAL_FACTORS } from '../../core/imperial.js';
+import type { UnitSystem } from '../../core/hydrostaticsReport.js';
 import { prepareHull } from '../../core/preparedHull.js';
 import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
@@ -110,6 +109,10 @@ Example:
     const { hull } = read!;
     const prepared = prepareHull(hull);
     if (units !== 'si' || values['error-estimate'] === true) {
+      // Loaded only when asked for: the imperial factors come from mathjs, whose import
+      // costs most of a second, which the plain SI table should not pay.
+      const { hydrostaticsReport, reportCsv, reportText } = await import('../../core/hydrostaticsReport.js');
+      const { IMPERIAL_FACTORS } = await import('../../core/imperial.js');
       // Drafts are typed in feet when the table is asked for in imperial units.
       const metres = units === 'imperial' ? drafts!.map((d) => d * IMPERIAL_FACTORS.metresPerFoot) : drafts!;
       const rows = hydrostaticTable(prepared, metres, density!);
