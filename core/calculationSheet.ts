@@ -21,6 +21,7 @@
  */
 import { SEA_WATER_DENSITY } from './constants.js';
 import { checkDraft } from './hydrostatics.js';
+import { particularsFromIntegrals, type LengthParticulars } from './particulars.js';
 import type { PreparedHull } from './preparedHull.js';
 import { simpsonMultipliers } from './simpson.js';
 import { verticalSheet, type VerticalSheet } from './verticalSheet.js';
@@ -65,23 +66,8 @@ export interface SheetTotals {
   readonly y3SM: number;
 }
 
-/** What the sums give. */
-export interface SheetResults {
-  readonly volume: number;
-  readonly displacement: number;
-  readonly lcb: number;
-  readonly vcb: number;
-  readonly waterplaneArea: number;
-  readonly lcf: number;
-  readonly iT: number;
-  readonly iL: number;
-  readonly bmt: number;
-  readonly bml: number;
-  readonly kmt: number;
-  readonly kml: number;
-  readonly tpc: number;
-  readonly mct1cm: number;
-}
+/** What the sums give: the particulars formed from them (core/particulars.ts). */
+export type SheetResults = LengthParticulars;
 
 export interface CalculationSheet {
   readonly draft: number;
@@ -140,15 +126,20 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     t.y3SM += row.y3SM;
     verticals.push(verticalSheet(p.hull.stations[i]!.points, section, draft));
   });
-  const volume = commonFactor * t.areaSM;
-  const waterplaneArea = 2 * commonFactor * t.ySM;
-  const lcfFromMid = t.ySMLever / t.ySM;
-  const iT = (2 / 3) * commonFactor * t.y3SM;
-  const iL = 2 * commonFactor * t.ySMLever2 - waterplaneArea * lcfFromMid * lcfFromMid;
-  const vcb = t.momentZSM / t.areaSM;
-  const bmt = iT / volume;
-  const bml = iL / volume;
-  const displacement = density * volume;
+  const results = particularsFromIntegrals(
+    {
+      volume: commonFactor * t.areaSM,
+      momentX: commonFactor * t.areaSMLever,
+      momentZ: commonFactor * t.momentZSM,
+      waterplaneArea: 2 * commonFactor * t.ySM,
+      waterplaneMomentX: 2 * commonFactor * t.ySMLever,
+      waterplaneSecondMomentX: 2 * commonFactor * t.ySMLever2,
+      iT: (2 / 3) * commonFactor * t.y3SM,
+    },
+    xm,
+    p.perp.lbp,
+    density,
+  );
   return {
     draft,
     density,
@@ -158,22 +149,7 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     lbp: p.perp.lbp,
     stations,
     totals: t,
-    results: {
-      volume,
-      displacement,
-      lcb: xm + t.areaSMLever / t.areaSM,
-      vcb,
-      waterplaneArea,
-      lcf: xm + lcfFromMid,
-      iT,
-      iL,
-      bmt,
-      bml,
-      kmt: vcb + bmt,
-      kml: vcb + bml,
-      tpc: (density * waterplaneArea) / 100,
-      mct1cm: (displacement * bml) / (100 * p.perp.lbp),
-    },
+    results,
     verticals,
   };
 }

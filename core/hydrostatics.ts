@@ -18,6 +18,7 @@ import { fail, HalfbreadthError, type Issue } from './errors.js';
 import { SEA_WATER_DENSITY } from './constants.js';
 import type { HydrostaticRow } from './hydrostaticFields.js';
 import type { PreparedHull } from './preparedHull.js';
+import { particularsFromIntegrals } from './particulars.js';
 import { emptyValues } from './section.js';
 
 /** Check that a draft lies within the hull; the path names it in the request. */
@@ -110,47 +111,29 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
     ws += w * v.wettedGirth;
     if (y > yMax) yMax = y;
   }
-  aw *= 2;
-  awX *= 2;
-  awXX *= 2;
-  iT *= 2 / 3;
   // Immersed end faces (a transom, a square bow) are part of the wetted surface.
   ws += areas[0]! + areas[n - 1]!;
-
-  const lcfFromMid = awX / aw;
-  const iL = awXX - aw * lcfFromMid * lcfFromMid;
+  const particulars = particularsFromIntegrals(
+    { volume: vol, momentX: momX, momentZ: momZ, waterplaneArea: 2 * aw, waterplaneMomentX: 2 * awX, waterplaneSecondMomentX: 2 * awXX, iT: (2 / 3) * iT },
+    xm,
+    p.perp.lbp,
+    density,
+  );
   const ends = waterlineEnds(p, draft);
   const lwl = ends.fwd - ends.aft;
   const bwl = 2 * yMax;
   const am = midshipArea(p, areas);
-  const bmt = iT / vol;
-  const bml = iL / vol;
-  const vcb = momZ / vol;
-  const displacement = density * vol;
   const ratio = (a: number, b: number): number => (b > 0 ? a / b : Number.NaN);
   return {
     draft,
-    volume: vol,
-    displacement,
-    lcb: xm + momX / vol,
-    vcb,
-    waterplaneArea: aw,
-    lcf: xm + lcfFromMid,
-    iT,
-    iL,
-    bmt,
-    bml,
-    kmt: vcb + bmt,
-    kml: vcb + bml,
-    tpc: (density * aw) / 100,
-    mct1cm: (displacement * bml) / (100 * p.perp.lbp),
+    ...particulars,
     lwl,
     bwl,
     am,
     cb: ratio(vol, lwl * bwl * draft),
     cm: ratio(am, bwl * draft),
     cp: ratio(vol, am * lwl),
-    cwp: ratio(aw, lwl * bwl),
+    cwp: ratio(particulars.waterplaneArea, lwl * bwl),
     wettedSurface: ws,
   };
 }

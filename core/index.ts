@@ -29,3 +29,4 @@ export * from './errorEstimate.js';
 export * from './imperial.js';
 export * from './hydrostaticsReport.js';
 export * from './fairness.js';
+export * from './particulars.js';
