@@ -6,6 +6,7 @@
 import Papa from 'papaparse';
 import { CAUTION } from './caution.js';
 import { csvSafeText } from './csvSafe.js';
+import { alignedTable, textCell } from './textTable.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from './hydrostaticFields.js';
 import { perpendiculars, type HullModel } from './hullModel.js';
 
@@ -69,24 +70,9 @@ export function hydrostaticsCsv(result: HydrostaticResult): string {
   return preamble + Papa.unparse({ fields: header, data }, { newline: '\r\n' }) + '\r\n';
 }
 
-/** Decimals shown in the text table for each unit (the JSON and CSV keep full precision). */
-const DECIMALS: Record<string, number> = { m: 3, m2: 2, m3: 3, m4: 1, t: 2, 't/cm': 3, 't.m/cm': 3, '-': 4 };
-
 /** An aligned text table with a units line, for the terminal. */
 export function hydrostaticsText(result: HydrostaticResult): string {
-  const cols = HYDROSTATIC_FIELDS.map((f) => {
-    const cells = result.rows.map((r) => (Number.isFinite(r[f.key]) ? r[f.key].toFixed(DECIMALS[f.unit] ?? 3) : '-'));
-    const unit = f.unit === '-' ? '' : f.unit;
-    const width = Math.max(f.label.length, unit.length, ...cells.map((c) => c.length));
-    return { head: f.label.padStart(width), unit: unit.padStart(width), cells: cells.map((c) => c.padStart(width)) };
-  });
-  const lines = [
-    `${result.hull.name}: ${result.hull.stations} stations, LBP ${result.hull.lbp.toFixed(3)} m, density ${result.density} t/m3`,
-    cols.map((c) => c.head).join('  '),
-    cols.map((c) => c.unit).join('  '),
-    ...result.rows.map((_r, i) => cols.map((c) => c.cells[i]).join('  ')),
-    '',
-    CAUTION,
-  ];
-  return lines.join('\n') + '\n';
+  const columns = HYDROSTATIC_FIELDS.map((f) => ({ label: f.label, unit: f.unit, cells: result.rows.map((r) => textCell(r[f.key], f.unit)) }));
+  const title = `${result.hull.name}: ${result.hull.stations} stations, LBP ${result.hull.lbp.toFixed(3)} m, density ${result.density} t/m3`;
+  return alignedTable([title], columns, result.rows.length);
 }

@@ -13,6 +13,7 @@ import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatH
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from './hydrostaticFields.js';
 import type { HullModel } from './hullModel.js';
 import { cubicFeetPerLongTon, IMPERIAL_FIELDS, IMPERIAL_UNITS, imperialRow } from './imperial.js';
+import { alignedTable, textCell } from './textTable.js';
 
 export type UnitSystem = 'si' | 'imperial';
 
@@ -119,31 +120,14 @@ export function reportCsv(r: HydrostaticsReport): string {
   return csvPreamble(preambleLines(r)) + Papa.unparse({ fields: cols.map(header), data }, { newline: '\r\n' }) + '\r\n';
 }
 
-/** Decimals shown in the text form for each unit (JSON and CSV keep full precision). */
-const DECIMALS: Record<string, number> = {
-  m: 3, m2: 2, m3: 3, m4: 1, t: 2, 't/cm': 3, 't.m/cm': 3,
-  ft: 3, ft2: 1, ft3: 1, ft4: 0, LT: 2, 'LT/in': 3, 'LT.ft/in': 2,
-  '-': 4,
-};
-
 export function reportText(r: HydrostaticsReport): string {
-  const cols = columns(r).map((c) => {
-    const cells = r.rows.map((row) => {
+  const cols = columns(r).map((c) => ({
+    label: c.label,
+    unit: c.unit,
+    cells: r.rows.map((row) => {
       const v = c.get(row);
-      if (!Number.isFinite(v)) return '-';
-      return c.estimate ? v.toExponential(1) : v.toFixed(DECIMALS[c.unit] ?? 3);
-    });
-    const unit = c.unit === '-' ? '' : c.unit;
-    const width = Math.max(c.label.length, unit.length, ...cells.map((s) => s.length));
-    return { head: c.label.padStart(width), unit: unit.padStart(width), cells: cells.map((s) => s.padStart(width)) };
-  });
-  const lines = [
-    ...preambleLines(r),
-    cols.map((c) => c.head).join('  '),
-    cols.map((c) => c.unit).join('  '),
-    ...r.rows.map((_row, i) => cols.map((c) => c.cells[i]).join('  ')),
-    '',
-    CAUTION,
-  ];
-  return lines.join('\n') + '\n';
+      return c.estimate && Number.isFinite(v) ? v.toExponential(1) : textCell(v, c.unit);
+    }),
+  }));
+  return alignedTable(preambleLines(r), cols, r.rows.length);
 }

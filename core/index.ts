@@ -30,3 +30,4 @@ export * from './imperial.js';
 export * from './hydrostaticsReport.js';
 export * from './fairness.js';
 export * from './particulars.js';
+export * from './textTable.js';
