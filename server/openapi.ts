@@ -8,7 +8,10 @@ import { z } from 'zod';
 import { CAUTION } from '../core/caution.js';
 import { HullModelSchema } from '../core/hullModel.js';
 import { HydrostaticRowSchema } from '../core/hydrostaticFields.js';
+import { AreasResultSchema } from './computations/areas.js';
+import { BonjeanResultSchema } from './computations/bonjean.js';
 import { CheckResultSchema } from './computations/check.js';
+import { SheetResultSchema } from './computations/sheet.js';
 import { PROBLEM_MEDIA_TYPE, ProblemSchema } from './problem.js';
 import {
   HealthSchema,
@@ -33,6 +36,9 @@ const RESPONSE_NAMES: readonly [string, z.ZodType][] = [
   ['HydrostaticRow', HydrostaticRowSchema],
   ['HullSummary', HullSummarySchema],
   ['HydrostaticResult', HydrostaticResultSchema],
+  ['SheetResult', SheetResultSchema],
+  ['BonjeanResult', BonjeanResultSchema],
+  ['AreasResult', AreasResultSchema],
   ['CheckResult', CheckResultSchema],
   ['HullListItem', HullListItemSchema],
   ['HullList', HullListSchema],
@@ -137,6 +143,7 @@ export function buildOpenapi(routes: readonly RouteSpec[]): Json {
       summary: 'Hydrostatics from a table of offsets',
       description:
         'Turns a table of offsets (grid or points form) into upright hydrostatic particulars by Simpson\'s rules, ' +
+        'with the calculation sheet, Bonjean data and the sectional-area curve behind them, ' +
         'and keeps hulls in a store. Lengths in m, densities in t/m3. Failures are RFC 9457 problem documents whose ' +
         `type is /problems/<slug>.\n\n${CAUTION}`,
     },

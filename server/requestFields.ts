@@ -15,6 +15,7 @@ import { addCoreIssues, type FieldCodes } from './validate.js';
 /** Codes of issues on each field, for issues zod raises itself (a wrong type, a missing field). */
 export const FIELD_CODES: FieldCodes = {
   drafts: 'HYD_DRAFT_LIST',
+  draft: 'HYD_DRAFT_LIST',
   density: 'HYD_DENSITY',
   offsets: 'HYD_MODEL_INVALID',
 };
@@ -45,6 +46,56 @@ export const DraftsBody = z
   .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} drafts` })
   .describe(`drafts, m, at most ${LIMITS.maxDrafts}`);
 
+/** Extra Bonjean heights: the drafts list of a query, optional (none asked for: the tabulated heights only). */
+export const HeightsQuery = DraftsQuery.optional().describe(
+  `extra heights, m, at which every station's area is also given: values and ranges from:step:to, at most ${LIMITS.maxDrafts} in all; each must meet some station`,
+);
+
+/** Extra Bonjean heights in a JSON body; may be left out or empty. */
+export const HeightsBody = z
+  .array(z.number({ error: (iss) => `a height must be a number of metres, not ${JSON.stringify(iss.input) ?? 'nothing'}` }), {
+    error: 'drafts must be an array of heights, m',
+  })
+  .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} heights` })
+  .optional()
+  .describe(`extra heights, m, at most ${LIMITS.maxDrafts}; each must meet some station`);
+
+/**
+ * A plain decimal number as typed (`1.3`, `.5`, `2e-1`), else NaN. Written so that a long
+ * run of digits is read in one pass (no nested quantifiers to backtrack over).
+ */
+export function decimalNumber(text: string): number {
+  return /^\s*[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?\s*$/.test(text) ? Number(text) : Number.NaN;
+}
+
+const DRAFT_HINT = 'give one draft in m above the baseline, e.g. 1.3';
+
+/** `draft=1.3` in a query: one plain number of metres; whether it lies within the hull is core's check (checkDraft). */
+export const DraftQuery = z
+  .string({ error: (iss) => (iss.input === undefined ? `draft is required; ${DRAFT_HINT}` : `draft must be given once; ${DRAFT_HINT}`) })
+  .transform((text, ctx) => {
+    const value = decimalNumber(text);
+    if (!Number.isFinite(value)) {
+      ctx.addIssue({ code: 'custom', message: `draft '${text.slice(0, 40)}' is not one number of metres; ${DRAFT_HINT}`, input: text, params: { code: 'HYD_DRAFT_LIST' } });
+      return z.NEVER;
+    }
+    return value;
+  })
+  .describe('draft, m: the height of the waterline above the baseline, above the lowest keel and at or below the lowest deck edge')
+  .meta({ examples: ['1.3'] });
+
+/** `draft: 1.3` in a JSON body. */
+export const DraftBody = z
+  .number({
+    error: (iss) =>
+      iss.input === undefined
+        ? `draft is required; ${DRAFT_HINT}`
+        : typeof iss.input === 'number'
+          ? `draft ${iss.input} is not a finite number of metres; ${DRAFT_HINT}`
+          : `draft must be a number of metres, not ${JSON.stringify(iss.input)?.slice(0, 40) ?? 'nothing'}`,
+  })
+  .describe('draft, m: the height of the waterline above the baseline');
+
 const DENSITY_TEXT = `water density, t/m3, ${DENSITY_RANGE.min} to ${DENSITY_RANGE.max} (default ${SEA_WATER_DENSITY}, sea water)`;
 
 /** The density rule of core (core/density.ts) as a zod refinement. */
@@ -61,7 +112,7 @@ const densityRule = (value: number, ctx: z.RefinementCtx, written?: string): num
 export const DensityQuery = z
   .string({ error: `density must be given once; ${DENSITY_TEXT}` })
   .default(String(SEA_WATER_DENSITY))
-  .transform((text, ctx) => densityRule(/^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(text) ? Number(text) : Number.NaN, ctx, text.slice(0, 40)))
+  .transform((text, ctx) => densityRule(decimalNumber(text), ctx, text.slice(0, 40)))
   .describe(DENSITY_TEXT);
 
 /** `density: 1.025` in a JSON body. */

@@ -158,6 +158,17 @@ describe('arbitrary input never fails the service', () => {
     );
   });
 
+  test('random drafts for the sheet, the Bonjean data and the areas of a stored hull get a 200 or a 4xx problem, never a 5xx', async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom('sheet?draft', 'bonjean?drafts', 'areas?draft'), fc.string({ maxLength: 40 }), async (route, value) => {
+        const res = await app.inject({ method: 'GET', url: `/v1/hulls/${storedId}/${route}=${encodeURIComponent(value)}` });
+        if (res.statusCode !== 200) expectProblem(res, res.statusCode);
+        expect(res.statusCode).toBeLessThan(500);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   test('offsets a little wrong in many ways get a 200 or a 4xx problem, never a 5xx', async () => {
     const cell = fc.oneof(fc.constantFrom('', '0', '1', '-1', 'NaN', '1e400', 'x', '"', '0.5', '2', '#', ' '), fc.double({ noNaN: false }).map(String));
     await fc.assert(

@@ -12,7 +12,10 @@ import type { z } from 'zod';
 import { ERROR_CODES } from '../core/errors.js';
 import type { HullSummary } from '../core/formatHydrostatics.js';
 import { buildApp } from '../server/app.js';
+import { AreasResultSchema } from '../server/computations/areas.js';
+import { BonjeanResultSchema } from '../server/computations/bonjean.js';
 import { CheckResultSchema } from '../server/computations/check.js';
+import { SheetResultSchema } from '../server/computations/sheet.js';
 import { openapiText } from '../server/openapi.js';
 import { PROBLEM_CODES, ProblemSchema, STATUS_OF_CODE, problemSlug } from '../server/problem.js';
 import { HealthSchema, HullListSchema, HullRecordSchema, HullSummarySchema, HullWithOffsetsSchema, HydrostaticResultSchema } from '../server/responseSchemas.js';
@@ -76,6 +79,23 @@ describe('answers match the schemas the document is made from', () => {
     HullWithOffsetsSchema.strict().parse(JSON.parse((await app.inject({ method: 'GET', url: `/v1/hulls/${record.id}` })).body));
     HealthSchema.strict().parse(JSON.parse((await app.inject({ method: 'GET', url: '/healthz' })).body));
     ProblemSchema.strict().parse(JSON.parse((await app.inject({ method: 'GET', url: '/v1/hulls/nothing' })).body));
+  });
+
+  test('sheet, Bonjean data and sectional areas of a grid hull and of a points hull with knuckles', async () => {
+    // The points hull's vertical sheets have knuckles, cut panels and ordinates above the draft.
+    for (const file of ['workboat.csv', 'survey-launch.csv']) {
+      const offsets = readFileSync(new URL(`../offsets-demo/${file}`, import.meta.url), 'utf8');
+      const post = async (url: string): Promise<unknown> => {
+        const res = await app.inject({ method: 'POST', url, headers: csvHeaders, payload: offsets });
+        expect(res.statusCode, `${file} ${url}: ${res.body.slice(0, 300)}`).toBe(200);
+        return JSON.parse(res.body);
+      };
+      for (const draft of [0.3, 0.45, 1.1]) {
+        SheetResultSchema.strict().parse(await post(`/v1/sheet?draft=${draft}`));
+        AreasResultSchema.strict().parse(await post(`/v1/areas?draft=${draft}`));
+      }
+      BonjeanResultSchema.strict().parse(await post('/v1/bonjean?drafts=0.45,1.1'));
+    }
   });
 
   test('the hull summary schema has the type of core\'s HullSummary', () => {

@@ -237,7 +237,15 @@ describe('the hull store', () => {
       units: 'm',
       mediaType: 'text/csv',
       bytes: upload.length,
-      links: { self, source: `${self}/source`, hydrostatics: `${self}/hydrostatics?drafts=`, check: `${self}/check` },
+      links: {
+        self,
+        source: `${self}/source`,
+        hydrostatics: `${self}/hydrostatics?drafts=`,
+        sheet: `${self}/sheet?draft=`,
+        bonjean: `${self}/bonjean`,
+        areas: `${self}/areas?draft=`,
+        check: `${self}/check`,
+      },
       caution: CAUTION,
     });
     const src = await app.inject({ method: 'GET', url: `${self}/source` });
@@ -383,7 +391,19 @@ describe('the service routes', () => {
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toBe('text/html; charset=utf-8');
     expect(res.headers['content-security-policy']).toBe("default-src 'none'; style-src 'unsafe-inline'");
-    for (const route of ['POST /v1/hydrostatics', 'GET /v1/hulls/{id}/hydrostatics', 'POST /v1/hulls', 'DELETE /v1/hulls/{id}', 'POST /v1/check']) {
+    for (const route of [
+      'POST /v1/hydrostatics',
+      'GET /v1/hulls/{id}/hydrostatics',
+      'POST /v1/sheet',
+      'GET /v1/hulls/{id}/sheet',
+      'POST /v1/bonjean',
+      'GET /v1/hulls/{id}/bonjean',
+      'POST /v1/areas',
+      'GET /v1/hulls/{id}/areas',
+      'POST /v1/hulls',
+      'DELETE /v1/hulls/{id}',
+      'POST /v1/check',
+    ]) {
       expect(res.body).toContain(`<code>${route}</code>`);
     }
     expect(res.body).toContain(CAUTION.replace(/'/g, '&#39;'));

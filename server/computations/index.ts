@@ -1,10 +1,12 @@
 /**
  * The computations the service offers, in the order the API page lists them. Each is
- * one entry: the sheet, Bonjean and sectional-area computations of core join here as
- * they are wired (`import { sheet } from './sheet.js'` and add it to the list).
+ * one entry: a file here exporting a `Computation`, imported and added to the list.
  */
 import type { AnyComputation } from './computation.js';
+import { areas } from './areas.js';
+import { bonjean } from './bonjean.js';
 import { check } from './check.js';
 import { hydrostatics } from './hydrostatics.js';
+import { sheet } from './sheet.js';
 
-export const COMPUTATIONS: readonly AnyComputation[] = [hydrostatics, check];
+export const COMPUTATIONS: readonly AnyComputation[] = [hydrostatics, sheet, bonjean, areas, check];

@@ -77,7 +77,15 @@ function record(meta: HullMeta, hull: NewHull['model']): z.infer<typeof HullReco
     units: meta.units as z.infer<typeof HullRecordSchema>['units'],
     mediaType: meta.mediaType,
     bytes: meta.bytes,
-    links: { self, source: `${self}/source`, hydrostatics: `${self}/hydrostatics?drafts=`, check: `${self}/check` },
+    links: {
+      self,
+      source: `${self}/source`,
+      hydrostatics: `${self}/hydrostatics?drafts=`,
+      sheet: `${self}/sheet?draft=`,
+      bonjean: `${self}/bonjean`,
+      areas: `${self}/areas?draft=`,
+      check: `${self}/check`,
+    },
     caution: CAUTION,
   };
 }
