@@ -31,7 +31,17 @@ export function startBanner(store: HullStore, ids: readonly string[], baseUrl: s
       lines.push(hydrostaticsText(hydrostaticResult(hull.model, 1.025, hydrostaticTable(prepared, drafts))));
       shown = true;
     }
-    lines.push(`${hull.name}`, `  JSON: ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}`, `  CSV:  ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}&format=csv`, '');
+    const mid = drafts[Math.floor(drafts.length / 2)]!;
+    lines.push(
+      `${hull.name}`,
+      `  table (JSON):  ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}`,
+      `  table (CSV):   ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}&format=csv`,
+      `  sheet:         ${baseUrl}/v1/hulls/${id}/sheet?draft=${mid}`,
+      `  Bonjean:       ${baseUrl}/v1/hulls/${id}/bonjean`,
+      `  areas:         ${baseUrl}/v1/hulls/${id}/areas?draft=${mid}`,
+      `  check:         ${baseUrl}/v1/hulls/${id}/check`,
+      '',
+    );
   }
   lines.push('Stop with Ctrl-C.', '');
   return lines.join('\n');
