@@ -97,3 +97,6 @@ export function terminalSafe(text: string): string {
   // eslint-disable-next-line no-control-regex
   return text.replace(/[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/g, '?');
 }
+
+/** An option's value when it was given as text (parseArgs gives booleans for flags, undefined when absent). */
+export const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);

@@ -56,15 +56,7 @@ export interface SheetStation {
 }
 
 /** The sums of the product columns. */
-export interface SheetTotals {
-  readonly areaSM: number;
-  readonly areaSMLever: number;
-  readonly momentZSM: number;
-  readonly ySM: number;
-  readonly ySMLever: number;
-  readonly ySMLever2: number;
-  readonly y3SM: number;
-}
+export type SheetTotals = Pick<SheetStation, 'areaSM' | 'areaSMLever' | 'momentZSM' | 'ySM' | 'ySMLever' | 'ySMLever2' | 'y3SM'>;
 
 /** What the sums give: the particulars formed from them (core/particulars.ts). */
 export type SheetResults = LengthParticulars;

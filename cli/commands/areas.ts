@@ -12,10 +12,8 @@ import { sectionalAreaCurve } from '../../core/sectionalAreaCurve.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
+import { chooseFormat, readInput, terminalSafe, type CliIo, str } from '../io.js';
 import { singleDraft } from './draftOption.js';
-
-const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
 
 export const areas: Command = {
   name: 'areas',

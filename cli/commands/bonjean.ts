@@ -13,9 +13,7 @@ import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
-
-const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
+import { chooseFormat, readInput, terminalSafe, type CliIo, str } from '../io.js';
 
 export const bonjean: Command = {
   name: 'bonjean',

@@ -16,9 +16,7 @@ import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
-
-const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
+import { chooseFormat, readInput, terminalSafe, type CliIo, str } from '../io.js';
 
 /** The density from --density or --fresh (sea water when neither), checked against DENSITY_RANGE. */
 export function densityOption(values: CommandArgs['values']): number {

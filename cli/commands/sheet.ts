@@ -12,11 +12,9 @@ import { readOffsetsCsv } from '../../core/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
+import { chooseFormat, readInput, terminalSafe, type CliIo, str } from '../io.js';
 import { singleDraft } from './draftOption.js';
 import { densityOption } from './hydrostatics.js';
-
-const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
 
 export const sheet: Command = {
   name: 'sheet',
