@@ -18,9 +18,9 @@ import { existsSync, readFileSync } from 'node:fs';
 import { cpus, loadavg, platform, release } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { hydrostaticTable } from '../core/hydrostatics.js';
-import { prepareHull } from '../core/preparedHull.js';
-import { readOffsetsCsv } from '../core/readOffsets.js';
+import { hydrostaticTable } from '../core/upright/hydrostatics.js';
+import { prepareHull } from '../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../core/offsets/readOffsets.js';
 
 const LENGTH = 20; // m
 const BEAM = 6; // m

@@ -2,7 +2,7 @@
  * Gathering the issues of several independent inputs (the file, the drafts, the
  * density) so that one run reports all of them, not the first.
  */
-import { HalfbreadthError, type Issue } from '../core/errors.js';
+import { HalfbreadthError, type Issue } from '../core/common/errors.js';
 
 /** Run `f`; if it throws HalfbreadthError, keep its issues and give undefined. Other faults pass through. */
 export function attempt<T>(f: () => T, into: Issue[]): T | undefined {

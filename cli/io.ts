@@ -5,7 +5,7 @@
  * the output format.
  */
 import { readFile } from 'node:fs/promises';
-import { HalfbreadthError, issue } from '../core/errors.js';
+import { HalfbreadthError, issue } from '../core/common/errors.js';
 
 /** A stream the command line writes text to. */
 export interface TextSink {

@@ -5,7 +5,7 @@
  * (its stack too when HALFBREADTH_DEBUG=1).
  */
 import { parseArgs } from 'node:util';
-import { HalfbreadthError, issue, type Issue } from '../core/errors.js';
+import { HalfbreadthError, issue, type Issue } from '../core/common/errors.js';
 import { EXIT, type Command, type CommandArgs } from './command.js';
 import { COMMANDS, findCommand } from './commands/index.js';
 import { processIo, STDIN_LABEL, type CliIo } from './io.js';

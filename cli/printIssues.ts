@@ -6,7 +6,7 @@
  * the core and already name the line, column or field and the rule. Control characters
  * that a file's text could bring into a message are shown as `?` (cli/io.ts terminalSafe).
  */
-import type { Issue } from '../core/errors.js';
+import type { Issue } from '../core/common/errors.js';
 import { terminalSafe, type TextSink } from './io.js';
 
 /** Path roots that belong to a command-line option rather than to the input file. */

@@ -1,33 +1,13 @@
-/** The pure computational core of Halfbreadth: no file, network or process I/O. */
-export * from './errors.js';
-export * from './limits.js';
-export * from './constants.js';
-export * from './caution.js';
-export * from './hullModel.js';
-export * from './hullRules.js';
-export * from './simpson.js';
-export * from './section.js';
-export * from './preparedHull.js';
-export * from './hydrostaticFields.js';
-export * from './hydrostatics.js';
-export * from './draftList.js';
-export * from './csvSafe.js';
-export * from './formatHydrostatics.js';
-export * from './units.js';
-export * from './feetInches.js';
-export * from './readOffsets.js';
-export * from './writeOffsets.js';
-export * from './calculationSheet.js';
-export * from './verticalSheet.js';
-export * from './multiplierText.js';
-export * from './formatSheet.js';
-export * from './bonjean.js';
-export * from './formatBonjean.js';
-export * from './sectionalAreaCurve.js';
-export * from './formatAreas.js';
-export * from './errorEstimate.js';
-export * from './imperial.js';
-export * from './hydrostaticsReport.js';
-export * from './fairness.js';
-export * from './particulars.js';
-export * from './textTable.js';
+/**
+ * The pure computational core of Halfbreadth: no file, network or process I/O.
+ * Folders are layers, lowest first: common, quadrature, hull, offsets, fairness, upright, report (stability, when it comes, sits
+ * between upright and report). A file imports only from its own folder or a lower one;
+ * test/architecture/layering.test.ts keeps it so.
+ */
+export * from './common/index.js';
+export * from './quadrature/index.js';
+export * from './hull/index.js';
+export * from './offsets/index.js';
+export * from './fairness/index.js';
+export * from './upright/index.js';
+export * from './report/index.js';

@@ -52,8 +52,18 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
 
   registerProblemHandler(app);
   registerUploadBody(app);
+  // Once the service is closing, an answer to a request still in flight tells the client
+  // to close its connection, so the socket ends with the answer instead of idling until
+  // the keep-alive timeout and holding up the exit (idle sockets are closed by
+  // forceCloseConnections: 'idle' when closing starts; this covers the ones that turn
+  // idle after it).
+  let closing = false;
+  app.addHook('preClose', async () => {
+    closing = true;
+  });
   app.addHook('onSend', async (_req, reply, payload) => {
     reply.header('x-content-type-options', 'nosniff');
+    if (closing) reply.header('connection', 'close');
     return payload;
   });
   registerRoutes(app, ALL_ROUTES, ctx);

@@ -2,7 +2,7 @@
  * The API page: plain HTML listing the routes, their parameters and answers, made from
  * the OpenAPI document, and a page for each problem type. Everything shown is escaped.
  */
-import { CAUTION } from '../core/caution.js';
+import { CAUTION } from '../core/common/caution.js';
 import { PROBLEM_CODES, STATUS_OF_CODE, problemSlug, problemTitle, problemType } from './problem.js';
 import type { ProblemCode } from './serviceErrors.js';
 

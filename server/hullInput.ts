@@ -3,10 +3,10 @@
  * or a JSON hull model (the `offsets` field of a JSON body) read by readHullJson.
  * Issues of a JSON model get `offsets` at the head of their paths, as CSV issues have.
  */
-import { HalfbreadthError } from '../core/errors.js';
-import type { HullModel } from '../core/hullModel.js';
-import { prepareHull, type PreparedHull } from '../core/preparedHull.js';
-import { readHullJson, readOffsetsCsv } from '../core/readOffsets.js';
+import { HalfbreadthError } from '../core/common/errors.js';
+import type { HullModel } from '../core/hull/hullModel.js';
+import { prepareHull, type PreparedHull } from '../core/hull/preparedHull.js';
+import { readHullJson, readOffsetsCsv } from '../core/offsets/readOffsets.js';
 import type { HullForm } from './store/hullStore.js';
 
 /** A hull read and made ready for computation. */

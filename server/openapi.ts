@@ -5,9 +5,9 @@
  * "input": defaults may be left out), answers as the service writes them ("output").
  */
 import { z } from 'zod';
-import { CAUTION } from '../core/caution.js';
-import { HullModelSchema } from '../core/hullModel.js';
-import { HydrostaticRowSchema } from '../core/hydrostaticFields.js';
+import { CAUTION } from '../core/common/caution.js';
+import { HullModelSchema } from '../core/hull/hullModel.js';
+import { HydrostaticRowSchema } from '../core/upright/hydrostaticFields.js';
 import { AreasResultSchema } from './computations/areas.js';
 import { BonjeanResultSchema } from './computations/bonjean.js';
 import { CheckResultSchema } from './computations/check.js';

@@ -7,7 +7,7 @@
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
-import { HalfbreadthError } from '../core/errors.js';
+import { HalfbreadthError } from '../core/common/errors.js';
 import { hullFromCsv } from './hullInput.js';
 import { sha256, type HullStore } from './store/hullStore.js';
 

@@ -13,11 +13,11 @@
  */
 import type { FastifyError, FastifyInstance, FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
-import { CAUTION } from '../core/caution.js';
-import { ERROR_CODES, HalfbreadthError, type ErrorCode } from '../core/errors.js';
+import { CAUTION } from '../core/common/caution.js';
+import { ERROR_CODES, HalfbreadthError, type ErrorCode } from '../core/common/errors.js';
 import { SERVICE_CODES, ServiceError, type ProblemCode, type ProblemIssue } from './serviceErrors.js';
 
-/** HTTP status of each code. 400: unreadable bodies and bad query values; 413: over the body limit or the hull-size limits of core/limits.ts; 422: input that reads but breaks a rule of a hull. */
+/** HTTP status of each code. 400: unreadable bodies and bad query values; 413: over the body limit or the hull-size limits of core/common/limits.ts; 422: input that reads but breaks a rule of a hull. */
 export const STATUS_OF_CODE: Readonly<Record<ProblemCode, number>> = {
   HYD_CSV_UNREADABLE: 400,
   HYD_HEADER: 422,

@@ -5,10 +5,10 @@
  * and the OpenAPI document.
  */
 import { z } from 'zod';
-import { DENSITY_RANGE, SEA_WATER_DENSITY } from '../core/constants.js';
-import { checkDensity } from '../core/density.js';
-import { parseDraftList } from '../core/draftList.js';
-import { LIMITS } from '../core/limits.js';
+import { DENSITY_RANGE, SEA_WATER_DENSITY } from '../core/common/constants.js';
+import { checkDensity } from '../core/common/density.js';
+import { parseDraftList } from '../core/common/draftList.js';
+import { LIMITS } from '../core/common/limits.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
 import { addCoreIssues, type FieldCodes } from './validate.js';
 
@@ -98,7 +98,7 @@ export const DraftBody = z
 
 const DENSITY_TEXT = `water density, t/m3, ${DENSITY_RANGE.min} to ${DENSITY_RANGE.max} (default ${SEA_WATER_DENSITY}, sea water)`;
 
-/** The density rule of core (core/density.ts) as a zod refinement. */
+/** The density rule of core (core/common/density.ts) as a zod refinement. */
 const densityRule = (value: number, ctx: z.RefinementCtx, written?: string): number => {
   try {
     return checkDensity(value, ['density'], written);

@@ -4,13 +4,13 @@
  * core; a test pins that these schemas infer the same types.
  */
 import { z } from 'zod';
-import { HullModelSchema } from '../core/hullModel.js';
-import { HydrostaticRowSchema } from '../core/hydrostaticFields.js';
-import { LengthUnitSchema } from '../core/units.js';
+import { HullModelSchema } from '../core/hull/hullModel.js';
+import { HydrostaticRowSchema } from '../core/upright/hydrostaticFields.js';
+import { LengthUnitSchema } from '../core/common/units.js';
 
-export const CautionField = z.string().describe('the caution that goes with every result (core/caution.ts)');
+export const CautionField = z.string().describe('the caution that goes with every result (core/common/caution.ts)');
 
-/** core's HullSummary (core/formatHydrostatics.ts). */
+/** core's HullSummary (core/report/formatHydrostatics.ts). */
 export const HullSummarySchema = z
   .object({
     name: z.string(),
@@ -22,7 +22,7 @@ export const HullSummarySchema = z
   })
   .describe('what a result says of the hull it came from');
 
-/** core's HydrostaticResult (core/formatHydrostatics.ts). */
+/** core's HydrostaticResult (core/report/formatHydrostatics.ts). */
 export const HydrostaticResultSchema = z
   .object({
     hull: HullSummarySchema,

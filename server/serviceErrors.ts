@@ -1,10 +1,10 @@
 /**
  * Failures that belong to HTTP rather than to a hull: an unknown id or route, a body
  * that is not JSON or not UTF-8, the wrong media type. They sit beside core's catalogue
- * (core/errors.ts), which holds the rules an offsets file or a query value can break;
+ * (core/common/errors.ts), which holds the rules an offsets file or a query value can break;
  * server/problem.ts maps both to statuses in one table.
  */
-import type { ErrorCode } from '../core/errors.js';
+import type { ErrorCode } from '../core/common/errors.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
 
 export const SERVICE_CODES = {

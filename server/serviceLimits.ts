@@ -1,9 +1,9 @@
 /**
  * Limits of the HTTP service, declared once. The hull-size limits are core's
- * (core/limits.ts); these bound what one request may cost the service.
+ * (core/common/limits.ts); these bound what one request may cost the service.
  */
 export const SERVICE_LIMITS = {
-  /** Largest request body, bytes: 16 MiB, room for the largest hull core/limits.ts allows in grid form. */
+  /** Largest request body, bytes: 16 MiB, room for the largest hull core/common/limits.ts allows in grid form. */
   bodyLimit: 16 * 1024 * 1024,
   /** A client must send its whole request within this time, ms (slow senders are cut off). */
   requestTimeout: 30_000,

@@ -4,9 +4,9 @@
  * of every demo hull's table (CSV for a spreadsheet's web query). Written to stderr so
  * the JSON request log on stdout stays machine-readable.
  */
-import { hydrostaticResult, hydrostaticsText } from '../core/formatHydrostatics.js';
-import { hydrostaticTable } from '../core/hydrostatics.js';
-import { prepareHull } from '../core/preparedHull.js';
+import { hydrostaticResult, hydrostaticsText } from '../core/report/formatHydrostatics.js';
+import { hydrostaticTable } from '../core/upright/hydrostatics.js';
+import { prepareHull } from '../core/hull/preparedHull.js';
 import type { HullStore } from './store/hullStore.js';
 
 /** Six drafts from 30 % to 80 % of the hull's depth, rounded to 5 cm: a working range for a first look. */

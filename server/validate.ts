@@ -4,8 +4,8 @@
  * every issue, each with the path of the field and a code from core's catalogue.
  */
 import type { z } from 'zod';
-import { ERROR_CODES, HalfbreadthError, issue, type ErrorCode, type Issue } from '../core/errors.js';
-import { pathText } from '../core/readHullJson.js';
+import { ERROR_CODES, HalfbreadthError, issue, type ErrorCode, type Issue } from '../core/common/errors.js';
+import { pathText } from '../core/offsets/readHullJson.js';
 
 const isCode = (v: unknown): v is ErrorCode => typeof v === 'string' && Object.hasOwn(ERROR_CODES, v);
 

@@ -1,14 +1,14 @@
 /**
  * `halfbreadth areas <file|-> --draft <m>`: the curve of sectional areas at a draft
  * with its LCB, as a text table, CSV or JSON. Thin: the curve and its forms come from
- * core/sectionalAreaCurve.ts and core/formatAreas.ts.
+ * core/upright/sectionalAreaCurve.ts and core/report/formatAreas.ts.
  */
-import type { Issue } from '../../core/errors.js';
-import { areasCsv, areasResult, areasText } from '../../core/formatAreas.js';
-import { toJson } from '../../core/formatHydrostatics.js';
-import { prepareHull } from '../../core/preparedHull.js';
-import { readOffsetsCsv } from '../../core/readOffsets.js';
-import { sectionalAreaCurve } from '../../core/sectionalAreaCurve.js';
+import type { Issue } from '../../core/common/errors.js';
+import { areasCsv, areasResult, areasText } from '../../core/report/formatAreas.js';
+import { toJson } from '../../core/report/formatHydrostatics.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';

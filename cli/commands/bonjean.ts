@@ -1,15 +1,15 @@
 /**
  * `halfbreadth bonjean <file|-> [--drafts <list>]`: the Bonjean data of every station
  * (immersed area and its moment against height), as a text table, CSV or JSON. Thin:
- * the data and its forms come from core/bonjean.ts and core/formatBonjean.ts.
+ * the data and its forms come from core/upright/bonjean.ts and core/report/formatBonjean.ts.
  */
-import type { Issue } from '../../core/errors.js';
-import { bonjean as bonjeanData } from '../../core/bonjean.js';
-import { parseDraftList } from '../../core/draftList.js';
-import { bonjeanCsv, bonjeanResult, bonjeanText } from '../../core/formatBonjean.js';
-import { toJson } from '../../core/formatHydrostatics.js';
-import { prepareHull } from '../../core/preparedHull.js';
-import { readOffsetsCsv } from '../../core/readOffsets.js';
+import type { Issue } from '../../core/common/errors.js';
+import { bonjean as bonjeanData } from '../../core/upright/bonjean.js';
+import { parseDraftList } from '../../core/common/draftList.js';
+import { bonjeanCsv, bonjeanResult, bonjeanText } from '../../core/report/formatBonjean.js';
+import { toJson } from '../../core/report/formatHydrostatics.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';

@@ -3,13 +3,13 @@
  * its particulars (what the file holds, and the drafts a table of it may use) or every
  * error found, each with its line and column.
  */
-import { CAUTION } from '../../core/caution.js';
-import { HalfbreadthError, type Issue } from '../../core/errors.js';
-import { fairnessWarnings } from '../../core/fairness.js';
-import type { HullModel } from '../../core/hullModel.js';
-import { prepareHull } from '../../core/preparedHull.js';
-import { readOffsetsCsv, type ReadResult } from '../../core/readOffsets.js';
-import { toJson } from '../../core/formatHydrostatics.js';
+import { CAUTION } from '../../core/common/caution.js';
+import { HalfbreadthError, type Issue } from '../../core/common/errors.js';
+import { fairnessWarnings } from '../../core/fairness/fairness.js';
+import type { HullModel } from '../../core/hull/hullModel.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv, type ReadResult } from '../../core/offsets/readOffsets.js';
+import { toJson } from '../../core/report/formatHydrostatics.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
 import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
@@ -24,7 +24,7 @@ export interface Warning {
 
 /**
  * The checks that find warnings in a hull that reads without error: the fairness of the
- * offsets (core/fairness.ts; each warning also gives x, z, value and a suggested value).
+ * offsets (core/fairness/fairness.ts; each warning also gives x, z, value and a suggested value).
  */
 export const WARNING_CHECKS: readonly ((hull: HullModel) => readonly Warning[])[] = [fairnessWarnings];
 

@@ -1,9 +1,9 @@
 /**
  * The single `--draft <m>` of the commands that work at one waterline (sheet, areas),
- * read with the drafts-list rules of core/draftList.ts.
+ * read with the drafts-list rules of core/common/draftList.ts.
  */
-import { fail } from '../../core/errors.js';
-import { parseDraftList } from '../../core/draftList.js';
+import { fail } from '../../core/common/errors.js';
+import { parseDraftList } from '../../core/common/draftList.js';
 
 export function singleDraft(text: string | undefined): number {
   const list = parseDraftList(text ?? '', ['draft']);

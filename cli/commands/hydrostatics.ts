@@ -3,16 +3,16 @@
  * an offsets file at a list of drafts, as a text table, CSV or JSON. Thin: the reading,
  * the figures and the three forms all come from the core.
  */
-import { HalfbreadthError, issue, type Issue } from '../../core/errors.js';
-import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/constants.js';
-import { checkDensity } from '../../core/density.js';
-import { parseDraftList } from '../../core/draftList.js';
-import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/formatHydrostatics.js';
-import { errorEstimates } from '../../core/errorEstimate.js';
-import { hydrostaticTable } from '../../core/hydrostatics.js';
-import type { UnitSystem } from '../../core/hydrostaticsReport.js';
-import { prepareHull } from '../../core/preparedHull.js';
-import { readOffsetsCsv } from '../../core/readOffsets.js';
+import { HalfbreadthError, issue, type Issue } from '../../core/common/errors.js';
+import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/common/constants.js';
+import { checkDensity } from '../../core/common/density.js';
+import { parseDraftList } from '../../core/common/draftList.js';
+import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/report/formatHydrostatics.js';
+import { errorEstimates } from '../../core/upright/errorEstimate.js';
+import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
+import type { UnitSystem } from '../../core/report/hydrostaticsReport.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
@@ -109,8 +109,8 @@ Example:
     if (units !== 'si' || values['error-estimate'] === true) {
       // Loaded only when asked for: the imperial factors come from mathjs, whose import
       // costs most of a second, which the plain SI table should not pay.
-      const { hydrostaticsReport, reportCsv, reportText } = await import('../../core/hydrostaticsReport.js');
-      const { IMPERIAL_FACTORS } = await import('../../core/imperial.js');
+      const { hydrostaticsReport, reportCsv, reportText } = await import('../../core/report/hydrostaticsReport.js');
+      const { IMPERIAL_FACTORS } = await import('../../core/report/imperial.js');
       // Drafts are typed in feet when the table is asked for in imperial units.
       const metres = units === 'imperial' ? drafts!.map((d) => d * IMPERIAL_FACTORS.metresPerFoot) : drafts!;
       const rows = hydrostaticTable(prepared, metres, density!);

@@ -1,14 +1,14 @@
 /**
  * `halfbreadth sheet <file|-> --draft <m>`: the calculation sheet of the upright
  * hydrostatics at one draft, as a text sheet, CSV or JSON. Thin: the sheet and its
- * forms come from the core (core/calculationSheet.ts, core/formatSheet.ts).
+ * forms come from the core (core/upright/calculationSheet.ts, core/report/formatSheet.ts).
  */
-import type { Issue } from '../../core/errors.js';
-import { calculationSheet } from '../../core/calculationSheet.js';
-import { toJson } from '../../core/formatHydrostatics.js';
-import { sheetCsv, sheetResult, sheetText } from '../../core/formatSheet.js';
-import { prepareHull } from '../../core/preparedHull.js';
-import { readOffsetsCsv } from '../../core/readOffsets.js';
+import type { Issue } from '../../core/common/errors.js';
+import { calculationSheet } from '../../core/upright/calculationSheet.js';
+import { toJson } from '../../core/report/formatHydrostatics.js';
+import { sheetCsv, sheetResult, sheetText } from '../../core/report/formatSheet.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';

@@ -1,12 +1,12 @@
 /**
- * The curve of sectional areas at one draft (core/sectionalAreaCurve.ts): each station's
+ * The curve of sectional areas at one draft (core/upright/sectionalAreaCurve.ts): each station's
  * immersed area, also as a fraction of the midship area, with the volume under the curve,
  * its centroid (the LCB), the midship area, LWL and the prismatic coefficient. The CSV is
- * core/formatAreas.ts areasCsv.
+ * core/report/formatAreas.ts areasCsv.
  */
 import { z } from 'zod';
-import { areasCsv, areasResult, type AreasResult } from '../../core/formatAreas.js';
-import { sectionalAreaCurve } from '../../core/sectionalAreaCurve.js';
+import { areasCsv, areasResult, type AreasResult } from '../../core/report/formatAreas.js';
+import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';

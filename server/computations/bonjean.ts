@@ -1,11 +1,11 @@
 /**
- * Bonjean data (core/bonjean.ts): the immersed area of every station and its moment
+ * Bonjean data (core/upright/bonjean.ts): the immersed area of every station and its moment
  * about the baseline against height, at the tabulated heights and at any extra heights
- * asked for. The CSV (core/formatBonjean.ts bonjeanCsv) has one row per station and height.
+ * asked for. The CSV (core/report/formatBonjean.ts bonjeanCsv) has one row per station and height.
  */
 import { z } from 'zod';
-import { bonjean as bonjeanData } from '../../core/bonjean.js';
-import { bonjeanCsv, bonjeanResult, type BonjeanResult } from '../../core/formatBonjean.js';
+import { bonjean as bonjeanData } from '../../core/upright/bonjean.js';
+import { bonjeanCsv, bonjeanResult, type BonjeanResult } from '../../core/report/formatBonjean.js';
 import { HeightsBody, HeightsQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';

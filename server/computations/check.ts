@@ -1,14 +1,14 @@
 /**
  * Checking offsets: whether they make a sound hull, every issue if not, what the hull
  * is (stations, perpendiculars, the range of drafts it can be floated at), and the
- * offsets that look unfair (core/fairness.ts), as warnings. Offsets that break a rule
+ * offsets that look unfair (core/fairness/fairness.ts), as warnings. Offsets that break a rule
  * are an answer here (valid: false), not a failure.
  */
 import { z } from 'zod';
-import { CAUTION } from '../../core/caution.js';
-import type { HalfbreadthError } from '../../core/errors.js';
-import { fairnessWarnings, type FairnessWarning } from '../../core/fairness.js';
-import { hullSummary, type HullSummary } from '../../core/formatHydrostatics.js';
+import { CAUTION } from '../../core/common/caution.js';
+import type { HalfbreadthError } from '../../core/common/errors.js';
+import { fairnessWarnings, type FairnessWarning } from '../../core/fairness/fairness.js';
+import { hullSummary, type HullSummary } from '../../core/report/formatHydrostatics.js';
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
 import type { Computation } from './computation.js';

@@ -6,8 +6,8 @@
  * validation and the OpenAPI document follow from it.
  */
 import { z } from 'zod';
-import type { HalfbreadthError } from '../../core/errors.js';
-import { HullModelSchema } from '../../core/hullModel.js';
+import type { HalfbreadthError } from '../../core/common/errors.js';
+import { HullModelSchema } from '../../core/hull/hullModel.js';
 import type { LoadedHull } from '../hullInput.js';
 import { FormatQuery, type Format } from '../requestFields.js';
 

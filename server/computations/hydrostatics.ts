@@ -1,7 +1,7 @@
-/** The upright hydrostatic table (core/hydrostatics.ts) at a list of drafts and a water density. */
+/** The upright hydrostatic table (core/upright/hydrostatics.ts) at a list of drafts and a water density. */
 import { z } from 'zod';
-import { hydrostaticTable } from '../../core/hydrostatics.js';
-import { hydrostaticResult, hydrostaticsCsv, type HydrostaticResult } from '../../core/formatHydrostatics.js';
+import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
+import { hydrostaticResult, hydrostaticsCsv, type HydrostaticResult } from '../../core/report/formatHydrostatics.js';
 import { DensityBody, DensityQuery, DraftsBody, DraftsQuery } from '../requestFields.js';
 import { HydrostaticResultSchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';

@@ -1,12 +1,12 @@
 /**
- * The calculation sheet at one draft (core/calculationSheet.ts): each station's
+ * The calculation sheet at one draft (core/upright/calculationSheet.ts): each station's
  * ordinates, Simpson's multiplier and products, the sums, the common factor and the
  * particulars they give, and each station's vertical sheet. JSON holds everything; the
- * CSV (core/formatSheet.ts sheetCsv) holds the longitudinal sheet.
+ * CSV (core/report/formatSheet.ts sheetCsv) holds the longitudinal sheet.
  */
 import { z } from 'zod';
-import { calculationSheet } from '../../core/calculationSheet.js';
-import { SHEET_RESULTS, sheetCsv, sheetResult, type SheetResult } from '../../core/formatSheet.js';
+import { calculationSheet } from '../../core/upright/calculationSheet.js';
+import { SHEET_RESULTS, sheetCsv, sheetResult, type SheetResult } from '../../core/report/formatSheet.js';
 import { DensityBody, DensityQuery, DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';

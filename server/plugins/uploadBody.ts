@@ -6,7 +6,7 @@
  */
 import { isUtf8 } from 'node:buffer';
 import type { FastifyInstance, FastifyRequest } from 'fastify';
-import { fail } from '../../core/errors.js';
+import { fail } from '../../core/common/errors.js';
 import { serviceFail } from '../serviceErrors.js';
 import { jsonErrorOffset, lineColumn } from '../jsonSyntax.js';
 

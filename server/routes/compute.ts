@@ -4,7 +4,7 @@
  * on a stored hull (with an ETag, answered 304 when the client's copy is current).
  */
 import type { FastifyRequest } from 'fastify';
-import { HalfbreadthError, fail } from '../../core/errors.js';
+import { HalfbreadthError, fail } from '../../core/common/errors.js';
 import { COMPUTATIONS } from '../computations/index.js';
 import { formatsOf, requestSchemas, type AnyComputation } from '../computations/computation.js';
 import { answerNotModified, etagOf } from '../etag.js';

@@ -4,12 +4,12 @@
  */
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
-import { CAUTION } from '../../core/caution.js';
-import { fail } from '../../core/errors.js';
-import { hullSummary } from '../../core/formatHydrostatics.js';
+import { CAUTION } from '../../core/common/caution.js';
+import { fail } from '../../core/common/errors.js';
+import { hullSummary } from '../../core/report/formatHydrostatics.js';
 import { jsonText } from '../jsonText.js';
-import { LengthUnitSchema } from '../../core/units.js';
-import { writeOffsetsCsv } from '../../core/writeOffsets.js';
+import { LengthUnitSchema } from '../../core/common/units.js';
+import { writeOffsetsCsv } from '../../core/offsets/writeOffsets.js';
 import type { ServiceContext } from '../context.js';
 import { answerNotModified, etagOf } from '../etag.js';
 import { hullFromCsv, hullFromJson, renamed, type ReadHull } from '../hullInput.js';
@@ -17,7 +17,7 @@ import { chooseFormat, CSV_MEDIA_TYPE, JSON_MEDIA_TYPE } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, FormatQuery, NameField } from '../requestFields.js';
 import { HullListSchema, HullRecordSchema, HullWithOffsetsSchema } from '../responseSchemas.js';
-import { HullModelSchema } from '../../core/hullModel.js';
+import { HullModelSchema } from '../../core/hull/hullModel.js';
 import { serviceFail } from '../serviceErrors.js';
 import type { HullMeta, NewHull } from '../store/hullStore.js';
 import { parseOrFail, requireObject } from '../validate.js';

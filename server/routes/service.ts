@@ -1,6 +1,6 @@
 /** The service's own routes: health, the OpenAPI document, the API page and the problem-type pages. */
 import { z } from 'zod';
-import { CAUTION } from '../../core/caution.js';
+import { CAUTION } from '../../core/common/caution.js';
 import { docsHtml, problemHtml } from '../docsPage.js';
 import { JSON_MEDIA_TYPE } from '../negotiate.js';
 import { codeOfSlug } from '../problem.js';

@@ -17,7 +17,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
-import type { HullModel } from '../../core/hullModel.js';
+import type { HullModel } from '../../core/hull/hullModel.js';
 import { Lru } from '../lru.js';
 import { migrate } from './migrations.js';
 
