@@ -1,12 +1,13 @@
 /**
  * A hull made ready for repeated evaluation: each station's section fitted once, the
- * Simpson weights along the length computed once, the wetted-surface slope factors
- * found once. Every draft after that costs one section evaluation per station.
+ * steps in the station spacing found once, the wetted-surface slope factors found once.
+ * Every draft after that costs one section evaluation per station, plus a few for the
+ * ends of the waterline (core/upright/waterlinePlan.ts).
  * Preparing costs O(stations x points); a table at D drafts then O(D x stations x log points).
  */
 import { perpendiculars, type HullModel, type Perpendiculars } from './hullModel.js';
 import { Section } from './section.js';
-import { simpsonWeights } from '../quadrature/simpson.js';
+import { isSpacingStep, type LengthPanel } from '../quadrature/lengthPanels.js';
 import { applyWettedFactors } from './wettedSurface.js';
 
 export interface PreparedHull {
@@ -14,15 +15,22 @@ export interface PreparedHull {
   readonly perp: Perpendiculars;
   /** Station positions, m. */
   readonly x: Float64Array;
-  /** Composite Simpson weights along the length for the stations (core/quadrature/simpson.ts). */
-  readonly weights: Float64Array;
   readonly sections: readonly Section[];
+  /**
+   * Where station i stands at a step in the spacing (the intervals either side differ by
+   * more than core/quadrature/lengthPanels.ts allows in one panel), a copy of its section whose
+   * wetted-surface factors come from the stations forward of it; `sections[i]` then has
+   * those from aft. Undefined elsewhere.
+   */
+  readonly forward: readonly (Section | undefined)[];
   /** Keel height of each station, m. */
   readonly keel: Float64Array;
   /** The lowest keel height of the hull: drafts must lie above it. */
   readonly lowestKeel: number;
   /** The lowest deck edge of the hull: drafts may not lie above it. */
   readonly lowestDeck: number;
+  /** Panels along the length of each run of stations met so far, by "from:to" (filled on use). */
+  readonly panelCache: Map<string, readonly LengthPanel[]>;
 }
 
 export function prepareHull(hull: HullModel): PreparedHull {
@@ -35,15 +43,17 @@ export function prepareHull(hull: HullModel): PreparedHull {
     keel[i] = sec.zKeel;
     return sec;
   });
-  applyWettedFactors(x, sections);
+  const forward = hull.stations.map((s, i) => (isSpacingStep(x, i) ? new Section(s.points) : undefined));
+  applyWettedFactors(x, sections, forward);
   return {
     hull,
     perp: perpendiculars(hull),
     x,
-    weights: simpsonWeights(x),
     sections,
+    forward,
     keel,
     lowestKeel: sections.reduce((m, s) => Math.min(m, s.zKeel), Infinity),
     lowestDeck: sections.reduce((m, s) => Math.min(m, s.zDeck), Infinity),
+    panelCache: new Map(),
   };
 }

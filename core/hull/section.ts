@@ -116,6 +116,11 @@ export class Section {
   readonly zDeck: number;
   /** Half-breadth of the lowest point: the flat of bottom to the centreline, m. */
   readonly yKeel: number;
+  /**
+   * Half-width of the flat of bottom, m: the widest point at the keel's height, whether
+   * the flat is left to the section's closure (then yKeel) or drawn out as points.
+   */
+  readonly yBottom: number;
   readonly pieceCount: number;
 
   private readonly span: Float64Array; // parameter length of each piece
@@ -156,6 +161,9 @@ export class Section {
     this.zKeel = this.zs[0]!;
     this.zDeck = this.zs[n - 1]!;
     this.yKeel = this.ys[0]!;
+    let yBottom = this.yKeel;
+    for (let k = 1; k < n && this.zs[k] === this.zKeel; k++) yBottom = Math.max(yBottom, this.ys[k]!);
+    this.yBottom = yBottom;
 
     const corners: number[] = [0];
     for (let k = 1; k < n - 1; k++) if (points[k]!.knuckle === true) corners.push(k);

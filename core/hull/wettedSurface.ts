@@ -28,55 +28,74 @@
 import { derivative3 } from '../quadrature/derivative.js';
 import type { Section } from './section.js';
 
-export function applyWettedFactors(x: Float64Array, sections: readonly Section[]): void {
+/**
+ * Set the slope factors of every section. `forward[i]`, where given, is a second copy of
+ * station i's section for the panels forward of it: station i then stands at a step in
+ * the station spacing (core/quadrature/lengthPanels.ts), and no derivative is taken
+ * across a step, just as no Simpson panel straddles one. `sections[i]` gets the factors
+ * from the station and those aft of it, `forward[i]` those from the station and those
+ * forward of it; a profile that turns at the step (a flat keel meeting a raked stem at a
+ * closer-spaced station) keeps each side's own slope.
+ */
+export function applyWettedFactors(x: Float64Array, sections: readonly Section[], forward: readonly (Section | undefined)[] = []): void {
   const n = sections.length;
   for (let i = 0; i < n; i++) {
-    const sec = sections[i]!;
-    const prev = sections[i - 1];
-    const next = sections[i + 1];
-    const xa = i > 0 ? x[i - 1]! : Number.NaN;
-    const xb = i < n - 1 ? x[i + 1]! : Number.NaN;
-    const ys = sec.pointsY();
-    const zs = sec.pointsZ();
-    const tan = sec.pointTangents();
-    const zx = derivative3(xa, prev?.zKeel ?? Number.NaN, x[i]!, sec.zKeel, xb, next?.zKeel ?? Number.NaN);
-    const keelFactor = Math.sqrt(1 + zx * zx);
-    const factors = new Float64Array(ys.length);
-    const factorsBelow = new Float64Array(ys.length);
-    for (let k = 0; k < ys.length; k++) {
-      const z = zs[k]!;
-      const ya = prev?.halfBreadthAt(z) ?? Number.NaN;
-      const yb = next?.halfBreadthAt(z) ?? Number.NaN;
-      const yx = derivative3(xa, ya, x[i]!, ys[k]!, xb, yb);
-      const c = yx * tan.z[k]!;
-      factors[k] = Math.sqrt(1 + c * c);
-      factorsBelow[k] = factors[k]!;
+    const fwd = forward[i];
+    if (fwd === undefined) setFactors(x, sections, i, sections[i]!, true, true);
+    else {
+      setFactors(x, sections, i, sections[i]!, true, false);
+      setFactors(x, sections, i, fwd, false, true);
     }
-    // Corners: the motion of the corner line, on each face (see the module note).
-    const own = cornerPoints(sec);
-    for (let j = 0; j < own.length; j++) {
-      const k = own[j]!;
-      if (k < 0) continue; // the centreline end of a flat of bottom closed by the section itself
-      const a = prev === undefined ? undefined : matchingCorner(prev, j, own.length);
-      const b = next === undefined ? undefined : matchingCorner(next, j, own.length);
-      if (a !== undefined || b !== undefined) {
-        const dy = derivative3(xa, a?.y ?? Number.NaN, x[i]!, ys[k]!, xb, b?.y ?? Number.NaN);
-        const dz = derivative3(xa, a?.z ?? Number.NaN, x[i]!, zs[k]!, xb, b?.z ?? Number.NaN);
-        const above = dy * tan.z[k]! - dz * tan.y[k]!;
-        const below = dy * tan.zBelow[k]! - dz * tan.yBelow[k]!;
-        factors[k] = Math.sqrt(1 + above * above);
-        factorsBelow[k] = Math.sqrt(1 + below * below);
-      }
-      // A level face at the keel's height is a flat of bottom drawn out as points: it
-      // rises with the keel, as the flat that the section closes itself does.
-      if (zs[k] === sec.zKeel) {
-        if (tan.z[k] === 0) factors[k] = keelFactor;
-        if (tan.zBelow[k] === 0) factorsBelow[k] = keelFactor;
-      }
-    }
-    sec.setWettedFactors(factors, factorsBelow);
-    sec.bottomFactor = keelFactor;
   }
+}
+
+/** The factors of station i's section `sec`, from its neighbours aft (`useAft`) and forward (`useFwd`). */
+function setFactors(x: Float64Array, sections: readonly Section[], i: number, sec: Section, useAft: boolean, useFwd: boolean): void {
+  const n = sections.length;
+  const prev = useAft ? sections[i - 1] : undefined;
+  const next = useFwd ? sections[i + 1] : undefined;
+  const xa = i > 0 ? x[i - 1]! : Number.NaN;
+  const xb = i < n - 1 ? x[i + 1]! : Number.NaN;
+  const ys = sec.pointsY();
+  const zs = sec.pointsZ();
+  const tan = sec.pointTangents();
+  const zx = derivative3(xa, prev?.zKeel ?? Number.NaN, x[i]!, sec.zKeel, xb, next?.zKeel ?? Number.NaN);
+  const keelFactor = Math.sqrt(1 + zx * zx);
+  const factors = new Float64Array(ys.length);
+  const factorsBelow = new Float64Array(ys.length);
+  for (let k = 0; k < ys.length; k++) {
+    const z = zs[k]!;
+    const ya = prev?.halfBreadthAt(z) ?? Number.NaN;
+    const yb = next?.halfBreadthAt(z) ?? Number.NaN;
+    const yx = derivative3(xa, ya, x[i]!, ys[k]!, xb, yb);
+    const c = yx * tan.z[k]!;
+    factors[k] = Math.sqrt(1 + c * c);
+    factorsBelow[k] = factors[k]!;
+  }
+  // Corners: the motion of the corner line, on each face (see the module note).
+  const own = cornerPoints(sec);
+  for (let j = 0; j < own.length; j++) {
+    const k = own[j]!;
+    if (k < 0) continue; // the centreline end of a flat of bottom closed by the section itself
+    const a = prev === undefined ? undefined : matchingCorner(prev, j, own.length);
+    const b = next === undefined ? undefined : matchingCorner(next, j, own.length);
+    if (a !== undefined || b !== undefined) {
+      const dy = derivative3(xa, a?.y ?? Number.NaN, x[i]!, ys[k]!, xb, b?.y ?? Number.NaN);
+      const dz = derivative3(xa, a?.z ?? Number.NaN, x[i]!, zs[k]!, xb, b?.z ?? Number.NaN);
+      const above = dy * tan.z[k]! - dz * tan.y[k]!;
+      const below = dy * tan.zBelow[k]! - dz * tan.yBelow[k]!;
+      factors[k] = Math.sqrt(1 + above * above);
+      factorsBelow[k] = Math.sqrt(1 + below * below);
+    }
+    // A level face at the keel's height is a flat of bottom drawn out as points: it
+    // rises with the keel, as the flat that the section closes itself does.
+    if (zs[k] === sec.zKeel) {
+      if (tan.z[k] === 0) factors[k] = keelFactor;
+      if (tan.zBelow[k] === 0) factorsBelow[k] = keelFactor;
+    }
+  }
+  sec.setWettedFactors(factors, factorsBelow);
+  sec.bottomFactor = keelFactor;
 }
 
 /**

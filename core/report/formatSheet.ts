@@ -16,6 +16,7 @@ import type { VerticalSheet } from '../upright/verticalSheet.js';
 
 /** The product columns of the longitudinal sheet, declared once for the CSV and the text table. */
 export const SHEET_COLUMNS = [
+  { key: 'kind', unit: '', label: 'line' },
   { key: 'x', unit: 'm', label: 'x' },
   { key: 'lever', unit: 'm', label: 'lever' },
   { key: 'halfBreadth', unit: 'm', label: 'y' },
@@ -30,6 +31,10 @@ export const SHEET_COLUMNS = [
   { key: 'ySMLever2', unit: 'm3', label: 'y.SM.lever2' },
   { key: 'y3SM', unit: 'm3', label: 'y3.SM' },
 ] as const satisfies readonly { key: keyof SheetStation; unit: string; label: string }[];
+
+/** The numeric columns: all but the line's kind. */
+type NumericColumn = Exclude<(typeof SHEET_COLUMNS)[number]['key'], 'kind'>;
+const isNumeric = (key: (typeof SHEET_COLUMNS)[number]['key']): key is NumericColumn => key !== 'kind';
 
 /** The results with their units and the formula that gives each from the sums. */
 export const SHEET_RESULTS = [
@@ -52,7 +57,8 @@ export const SHEET_RESULTS = [
 export interface SheetStationResult extends SheetStation {
   /** The multiplier as the trade writes it (1, 4, 1 1/2 ...). */
   readonly multiplierText: string;
-  readonly vertical: VerticalSheetResult;
+  /** The station's vertical sheet; null on an end or middle line. */
+  readonly vertical: VerticalSheetResult | null;
 }
 
 export interface VerticalSheetResult extends Omit<VerticalSheet, 'ordinates'> {
@@ -68,6 +74,8 @@ export interface SheetResult {
   readonly amidships: number;
   readonly caution: string;
   readonly stations: readonly SheetStationResult[];
+  readonly pieces: CalculationSheet['pieces'];
+  readonly ends: readonly string[];
   readonly totals: SheetTotals;
   readonly results: SheetResults;
 }
@@ -83,13 +91,15 @@ export function sheetResult(hull: HullModel, sheet: CalculationSheet): SheetResu
     amidships: sheet.amidships,
     caution: CAUTION,
     stations: sheet.stations.map((s, i) => {
-      const v = sheet.verticals[i]!;
+      const v = sheet.verticals[i] ?? null;
       return {
         ...s,
         multiplierText: multiplierText(s.multiplier),
-        vertical: { ...v, ordinates: v.ordinates.map((o) => ({ ...o, multiplierText: o.multiplier === null ? null : multiplierText(o.multiplier) })) },
+        vertical: v === null ? null : { ...v, ordinates: v.ordinates.map((o) => ({ ...o, multiplierText: o.multiplier === null ? null : multiplierText(o.multiplier) })) },
       };
     }),
+    pieces: sheet.pieces,
+    ends: sheet.ends,
     totals: sheet.totals,
     results: sheet.results,
   };
@@ -97,6 +107,14 @@ export function sheetResult(hull: HullModel, sheet: CalculationSheet): SheetResu
 
 /** Shortest text of a number to 10 significant digits (for comment lines). */
 const num = (v: number): string => (Number.isFinite(v) ? String(Number(v.toPrecision(10))) : '-');
+
+/** The pieces of the integration and the ends of the waterline, in words. */
+function pieceLines(r: SheetResult): string[] {
+  return [
+    ...r.ends,
+    ...r.pieces.map((pc) => `x = ${num(pc.from)} to ${num(pc.to)} m: ${pc.rule}`),
+  ];
+}
 
 function resultLines(r: SheetResult): string[] {
   return SHEET_RESULTS.map((f) => `${f.key} = ${f.formula} = ${num(r.results[f.key])} ${f.unit}`);
@@ -111,6 +129,7 @@ export function sheetCsv(r: SheetResult): string {
     `hull: ${csvSafeText(r.hull.name)}`,
     `draft: ${r.draft} m; density: ${r.density} t/m3`,
     `h = ${num(r.spacing)} m (the most common station interval); h/3 = ${num(r.commonFactor)} m; amidships = ${num(r.amidships)} m (levers are x - amidships)`,
+    ...pieceLines(r),
     ...resultLines(r),
     'the vertical sheet of each station is in the table and json forms',
   ]);
@@ -126,7 +145,8 @@ function alignRows(rows: readonly (readonly string[])[]): string[] {
 
 const f4 = (v: number): string => (Number.isFinite(v) ? v.toFixed(4) : '-');
 
-function verticalText(x: number, v: VerticalSheetResult): string[] {
+function verticalText(x: number, v: VerticalSheetResult | null): string[] {
+  if (v === null) return [];
   const head = `Station x = ${num(x)} m, keel z = ${num(v.keel)} m`;
   if (!v.immersed) return [head, `  ${v.lastPart}`];
   const rows = [
@@ -146,19 +166,23 @@ export function sheetText(r: SheetResult): string {
   const rows = [
     SHEET_COLUMNS.map((c) => c.label),
     SHEET_COLUMNS.map((c) => (c.unit === '-' ? '' : c.unit)),
-    ...r.stations.map((s) => SHEET_COLUMNS.map((c) => (c.key === 'multiplier' ? s.multiplierText : f4(s[c.key])))),
+    ...r.stations.map((s) => SHEET_COLUMNS.map((c) => (c.key === 'multiplier' ? s.multiplierText : isNumeric(c.key) ? f4(s[c.key]) : s.kind))),
     SHEET_COLUMNS.map((c, k) => (k === 0 ? 'sum' : c.key in r.totals ? f4(r.totals[c.key as keyof SheetTotals]) : '')),
   ];
+  const notes = r.stations.filter((s) => s.note !== null).map((s) => `${s.kind} line at x = ${num(s.x)} m: ${s.note}`);
   const lines = [
     `${r.hull.name}: calculation sheet at draft ${r.draft} m, density ${r.density} t/m3`,
     `h = ${num(r.spacing)} m (the most common station interval), h/3 = ${num(r.commonFactor)} m; levers from amidships x = ${num(r.amidships)} m`,
     '',
     ...alignRows(rows),
     '',
+    ...notes,
+    ...pieceLines(r),
+    '',
     ...resultLines(r),
     '',
     'Vertical sheets (area of each section below the waterline; y is the half-breadth):',
-    ...r.stations.flatMap((s) => ['', ...verticalText(s.x, s.vertical)]),
+    ...r.stations.flatMap((s) => (s.vertical === null ? [] : ['', ...verticalText(s.x, s.vertical)])),
     '',
     CAUTION,
   ];

@@ -4,8 +4,8 @@
  * uneven that no small fraction fits. Common practice, no source.
  */
 
-/** Denominators tried, smallest first: halves and quarters from halved end intervals, eighths from the 3/8 rule. */
-const DENOMINATORS = [1, 2, 3, 4, 6, 8, 12, 16, 24] as const;
+// The same denominators as the sheet's numbers (halves and quarters from halved end intervals, eighths from the 3/8 rule).
+import { MULTIPLIER_DENOMINATORS as DENOMINATORS } from '../quadrature/cleanMultiplier.js';
 
 /**
  * A multiplier as text.

@@ -1,17 +1,25 @@
 /**
- * The calculation sheet of the upright hydrostatics at one draft: one line per station
- * with its ordinates, Simpson's multiplier and products, then the sums, the common
- * factor and the particulars they give, as a naval architect sets the work out by hand.
+ * The calculation sheet of the upright hydrostatics at one draft: one line per ordinate
+ * along the length (each immersed station, and where the waterline ends between
+ * stations the end and the middle of the end piece) with its ordinates, Simpson's
+ * multiplier and products, then the pieces of the integration and the rule of each, the
+ * sums, the common factor and the particulars they give, as a naval architect sets the
+ * work out by hand.
  *
- * Method: the multipliers are the prepared hull's Simpson weights along the length
- * divided by h/3, h the most common station interval (core/quadrature/simpson.ts
- * simpsonMultipliers): 1, 4, 2, 4, ..., 4, 1 on equal spacing, 1/2, 2, 1 1/2, 4, ...
- * where the end intervals are halved, and the weight of each ordinate over h/3 on any
- * other spacing. The per-station values (immersed area, its vertical moment, the
- * half-breadth at the waterline) come from the station's fitted section, so the sheet's
- * results equal those of core/upright/hydrostatics.ts hydrostaticsAt to rounding: it is the same
- * sum, set out. Levers are x - amidships (amidships = (ap + fp) / 2), as the moments in
- * hydrostaticsAt are taken, and the results are given back in the file's x.
+ * Method: the ordinates and weights are those of core/upright/waterlinePlan.ts, the
+ * same plan the table is computed from; each weight divided by h/3, h the most common
+ * station interval, is the multiplier: 1, 4, 2, 4, ..., 4, 1 on equal spacing, 1/2, 2,
+ * 1 1/2, 4, ... where the end intervals are halved, 3/8 multiples on a second-rule
+ * panel, and the weight of the ordinate over h/3 on an end piece or uneven spacing.
+ * Multipliers that are a trade fraction to rounding are written as that fraction
+ * exactly (4, not 4.0000000000000036), and h is given to 12 significant digits, so the
+ * products on the sheet are what a checker gets by hand. The station values (immersed
+ * area, its vertical moment, the half-breadth at the waterline) come from the station's
+ * fitted section, the end and middle values from the section read between two stations
+ * (core/hull/betweenStations.ts), so the sheet's results equal those of core/upright/
+ * hydrostatics.ts hydrostaticsAt to rounding: it is the same sum, set out. Levers are
+ * x - amidships (amidships = (ap + fp) / 2), as the moments in hydrostaticsAt are
+ * taken, and the results are given back in the file's x.
  *
  * Formulae (E. C. Tupper, Introduction to Naval Architecture, 5th ed., Butterworth-
  * Heinemann 2013, ch. 3 and 4):
@@ -23,11 +31,18 @@ import { SEA_WATER_DENSITY } from '../common/constants.js';
 import { checkDraft } from './hydrostatics.js';
 import { particularsFromIntegrals, type LengthParticulars } from './particulars.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
-import { simpsonMultipliers } from '../quadrature/simpson.js';
+import { commonSpacing } from '../quadrature/simpson.js';
+import { cleanMultiplier } from '../quadrature/cleanMultiplier.js';
+import type { OrdinateKind } from './waterlinePlan.js';
+import { ordinateValues, waterlinePlan } from './waterlinePlan.js';
 import { verticalSheet, type VerticalSheet } from './verticalSheet.js';
 
-/** One station's line of the sheet. */
+/** One line of the sheet: an ordinate along the length. */
 export interface SheetStation {
+  /** A station, the end of the waterline between two stations, or the middle of a piece read between two stations. */
+  readonly kind: OrdinateKind;
+  /** For an end or a middle ordinate: where it is read from, in words; null for a station. */
+  readonly note: string | null;
   readonly x: number;
   /** x - amidships, m. */
   readonly lever: number;
@@ -71,29 +86,49 @@ export interface CalculationSheet {
   /** Amidships, the origin of the levers, m. */
   readonly amidships: number;
   readonly lbp: number;
+  /** The lines of the sheet in x order. */
   readonly stations: readonly SheetStation[];
+  /** The pieces of the integration along the length, in x order, with the rule of each. */
+  readonly pieces: readonly SheetPiece[];
+  /** Where the waterline ends, in words, aft and forward of each immersed run. */
+  readonly ends: readonly string[];
   readonly totals: SheetTotals;
   readonly results: SheetResults;
-  /** The vertical sheet of each station, in station order. */
-  readonly verticals: readonly VerticalSheet[];
+  /** The vertical sheet of each line's station; null for an end or middle line. */
+  readonly verticals: readonly (VerticalSheet | null)[];
 }
+
+/** A piece of the integration along the length. */
+export interface SheetPiece {
+  readonly from: number;
+  readonly to: number;
+  readonly rule: string;
+  /** Indices into the sheet's lines of the ordinates the piece uses. */
+  readonly lines: readonly number[];
+}
+
+const fmt = (v: number): string => String(Number(v.toPrecision(10)));
 
 /** The calculation sheet at `draft` (m) in water of `density` (t/m³). The draft is checked as for hydrostaticsAt. */
 export function calculationSheet(p: PreparedHull, draft: number, density = SEA_WATER_DENSITY): CalculationSheet {
   checkDraft(p, draft);
-  const { spacing, multipliers } = simpsonMultipliers(p.x);
+  const plan = waterlinePlan(p, draft);
+  // h to 12 significant digits: the interval a person reads off the offsets (2.1 - 1.4 is 0.7).
+  const spacing = Number(commonSpacing(p.x).toPrecision(12));
   const commonFactor = spacing / 3;
   const xm = p.perp.xm;
   const stations: SheetStation[] = [];
-  const verticals: VerticalSheet[] = [];
+  const verticals: (VerticalSheet | null)[] = [];
   const t = { areaSM: 0, areaSMLever: 0, momentZSM: 0, ySM: 0, ySMLever: 0, ySMLever2: 0, y3SM: 0 };
-  p.sections.forEach((section, i) => {
-    const v = section.evaluate(draft);
-    const x = p.x[i]!;
+  for (const o of plan.ordinates) {
+    const v = ordinateValues(p, o, draft);
+    const x = o.x;
     const lever = x - xm;
-    const sm = multipliers[i]!;
+    const sm = cleanMultiplier(o.weight / commonFactor);
     const y = v.halfBreadth;
     const row: SheetStation = {
+      kind: o.kind,
+      note: o.kind === 'station' ? null : ordinateNote(p, o.kind, o.a, o.b, o.t, draft),
       x,
       lever,
       halfBreadth: y,
@@ -116,8 +151,8 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     t.ySMLever += row.ySMLever;
     t.ySMLever2 += row.ySMLever2;
     t.y3SM += row.y3SM;
-    verticals.push(verticalSheet(p.hull.stations[i]!.points, section, draft));
-  });
+    verticals.push(o.kind === 'station' ? verticalSheet(p.hull.stations[o.a]!.points, p.sections[o.a]!, draft) : null);
+  }
   const results = particularsFromIntegrals(
     {
       volume: commonFactor * t.areaSM,
@@ -132,6 +167,11 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     p.perp.lbp,
     density,
   );
+  const ends = plan.ends.map((e) =>
+    e.between === null
+      ? `${e.side} end at x = ${fmt(e.x)} m: the hull's ${e.side === 'aft' ? 'aftmost' : 'foremost'} station, immersed`
+      : `${e.side} end at x = ${fmt(e.x)} m: where the straight keel line from station x = ${fmt(p.x[e.between[0]]!)} m (keel z = ${fmt(p.keel[e.between[0]]!)} m) to station x = ${fmt(p.x[e.between[1]]!)} m (keel z = ${fmt(p.keel[e.between[1]]!)} m) crosses the waterline`,
+  );
   return {
     draft,
     density,
@@ -140,8 +180,19 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     amidships: xm,
     lbp: p.perp.lbp,
     stations,
+    pieces: plan.pieces.map((pc) => ({ from: pc.from, to: pc.to, rule: pc.rule, lines: pc.ordinates })),
+    ends,
     totals: t,
     results,
     verticals,
   };
+}
+
+/** Where an end or middle ordinate is read from, in words. */
+function ordinateNote(p: PreparedHull, kind: OrdinateKind, a: number, b: number, t: number, draft: number): string {
+  const xa = fmt(p.x[a]!);
+  const xb = fmt(p.x[b]!);
+  if (kind === 'end') return `the waterline meets the keel line ${fmt(t)} of the way from station x = ${xa} m to station x = ${xb} m: no area; y is the flat of bottom there`;
+  const keel = (1 - t) * p.keel[a]! + t * p.keel[b]!;
+  return `read ${fmt(t)} of the way from station x = ${xa} m to station x = ${xb} m, each section taken ${fmt(draft - keel)} m above its own keel and blended`;
 }

@@ -2,24 +2,31 @@
  * The upright hydrostatic particulars of a hull at a draft.
  *
  * Method: each station's immersed area, vertical moment, waterline half-breadth and
- * wetted girth come from its section (core/hull/section.ts); the longitudinal integrals are
- * the composite Simpson rule over the stations (core/quadrature/simpson.ts), so the results equal
- * a calculation sheet of Simpson's multipliers. Definitions follow the field table of
+ * wetted girth come from its section (core/hull/section.ts); the longitudinal integrals run
+ * over the immersed length only, with the ordinates and weights of core/upright/
+ * waterlinePlan.ts (Simpson's rules between the stations, end pieces read from the
+ * hull between stations where the waterline ends), so the results equal the
+ * calculation sheet of the same plan. Definitions follow the field table of
  * the project's conventions (README, "Hydrostatic particulars"); for the formulae see
  * e.g. E. C. Tupper, Introduction to Naval Architecture, 5th ed. (Butterworth-
  * Heinemann, 2013), ch. 3 and 4.
  *
- * Where a waterline ends between two stations (a raked stem, a cut-up stern) its end
- * is placed where the straight keel line between them crosses the waterline; that sets
- * LWL. The midship area is that of a station at amidships, or read from the parabola
- * through the three stations nearest to it.
+ * LWL runs from the aftmost to the foremost end of the waterline (an end between two
+ * stations is where the straight keel line between them crosses it); BWL is twice the
+ * greatest half-breadth among the ordinates. The midship area is that of a station at
+ * amidships, or read from the parabola through the three stations nearest to it (no
+ * step in the spacing between them), or from the section between two stations where
+ * the parabola has no three stations to stand on.
  */
 import { fail, HalfbreadthError, type Issue } from '../common/errors.js';
 import { SEA_WATER_DENSITY } from '../common/constants.js';
 import type { HydrostaticRow } from './hydrostaticFields.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
 import { particularsFromIntegrals } from './particulars.js';
+import { valuesBetween } from '../hull/betweenStations.js';
 import { emptyValues } from '../hull/section.js';
+import { isSpacingStep } from '../quadrature/lengthPanels.js';
+import { forwardWettedGirth, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
 
 /** Check that a draft lies within the hull; the path names it in the request. */
 export function checkDraft(p: PreparedHull, draft: number, path: readonly (string | number)[] = ['draft']): void {
@@ -33,59 +40,73 @@ export function checkDraft(p: PreparedHull, draft: number, path: readonly (strin
   }
 }
 
-/** The aft and forward ends of the waterline at `draft`, m (see the module note). */
+/** The aft and forward ends of the waterline at `draft`, m: the outermost ends of core/upright/waterlinePlan.ts. */
 export function waterlineEnds(p: PreparedHull, draft: number): { aft: number; fwd: number } {
-  const { x, keel } = p;
-  const n = x.length;
-  let a = 0;
-  while (a < n && !(keel[a]! < draft)) a++;
-  let f = n - 1;
-  while (f >= 0 && !(keel[f]! < draft)) f--;
-  if (a >= n || f < 0) return { aft: Number.NaN, fwd: Number.NaN };
-  const cross = (i: number, j: number): number => {
-    // keel[j] >= draft > keel[i]; straight keel line between stations i and j.
-    const t = (keel[j]! - draft) / (keel[j]! - keel[i]!);
-    return x[j]! + (x[i]! - x[j]!) * t;
-  };
-  return { aft: a === 0 ? x[0]! : cross(a, a - 1), fwd: f === n - 1 ? x[n - 1]! : cross(f, f + 1) };
+  const { ends } = waterlinePlan(p, draft);
+  if (ends.length === 0) return { aft: Number.NaN, fwd: Number.NaN };
+  return { aft: Math.min(...ends.map((e) => e.x)), fwd: Math.max(...ends.map((e) => e.x)) };
 }
 
-/** Immersed sectional area at amidships (see the module note). */
-function midshipArea(p: PreparedHull, areas: Float64Array): number {
+/**
+ * Immersed sectional area at amidships (see the module note): a station there, else the
+ * parabola through three immersed stations around it that no step in the spacing
+ * separates, else the section read between the two stations around it.
+ */
+export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (station: number) => number): number {
   const { x } = p;
   const xm = p.perp.xm;
-  const n = x.length;
   const tol = 1e-9 * Math.max(1, Math.abs(p.perp.lbp));
-  let near = 0;
-  for (let i = 1; i < n; i++) if (Math.abs(x[i]! - xm) < Math.abs(x[near]! - xm)) near = i;
-  if (Math.abs(x[near]! - xm) <= tol) return areas[near]!;
-  const s = Math.min(Math.max(near - 1, 0), n - 3);
-  let sum = 0;
-  for (let k = s; k < s + 3; k++) {
-    let basis = 1;
-    for (let m = s; m < s + 3; m++) if (m !== k) basis *= (xm - x[m]!) / (x[k]! - x[m]!);
-    sum += basis * areas[k]!;
+  for (const [a, b] of plan.runs) {
+    const lo = x[a]!;
+    const hi = x[b]!;
+    if (xm < lo - tol || xm > hi + tol) continue;
+    // The interval [x_i, x_i+1] of the run that holds amidships.
+    let i = a;
+    while (i < b && x[i + 1]! < xm - tol) i++;
+    if (Math.abs(x[i]! - xm) <= tol) return areaOf(i);
+    if (i + 1 <= b && Math.abs(x[i + 1]! - xm) <= tol) return areaOf(i + 1);
+    // Three stations: i - 1, i, i + 1 or i, i + 1, i + 2, the third the nearer to amidships
+    // (the aft one on a tie, to a part in 1e9 of the length so that moving or scaling
+    // the hull does not change the choice), neither across a step.
+    const aftOk = i - 1 >= a && !isSpacingStep(x, i);
+    const fwdOk = i + 2 <= b && !isSpacingStep(x, i + 1);
+    let s = -1;
+    if (aftOk && fwdOk) s = xm - x[i - 1]! <= x[i + 2]! - xm + tol ? i - 1 : i;
+    else if (aftOk) s = i - 1;
+    else if (fwdOk) s = i;
+    if (s >= 0) {
+      let sum = 0;
+      for (let k = s; k < s + 3; k++) {
+        let basis = 1;
+        for (let m = s; m < s + 3; m++) if (m !== k) basis *= (xm - x[m]!) / (x[k]! - x[m]!);
+        sum += basis * areaOf(k);
+      }
+      return sum;
+    }
+    const between = valuesBetween(p.forward[i] ?? p.sections[i]!, p.sections[i + 1]!, (xm - x[i]!) / (x[i + 1]! - x[i]!), x[i + 1]! - x[i]!, plan.draft);
+    return between.area;
   }
-  return sum;
-}
-
-/** Scratch arrays reused across drafts of one table. */
-interface Scratch {
-  areas: Float64Array;
-}
-
-function scratchFor(p: PreparedHull): Scratch {
-  return { areas: new Float64Array(p.x.length) };
+  // Amidships in an end piece, or clear of the water.
+  for (const o of plan.ordinates) {
+    if (o.kind === 'station') continue;
+    const lo = Math.min(p.x[o.a]!, p.x[o.b]!);
+    const hi = Math.max(p.x[o.a]!, p.x[o.b]!);
+    if (xm >= lo && xm <= hi) {
+      const t = (xm - p.x[o.a]!) / (p.x[o.b]! - p.x[o.a]!);
+      return valuesBetween(p.sections[o.a]!, p.sections[o.b]!, t, p.x[o.b]! - p.x[o.a]!, plan.draft).area;
+    }
+  }
+  return 0;
 }
 
 /** Hydrostatic particulars at one draft (m), density in t/m³. */
-export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WATER_DENSITY, scratch: Scratch = scratchFor(p)): HydrostaticRow {
+export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WATER_DENSITY): HydrostaticRow {
   checkDraft(p, draft);
-  const { x, weights, sections } = p;
+  const plan = waterlinePlan(p, draft);
   const xm = p.perp.xm;
-  const n = x.length;
-  const areas = scratch.areas;
+  const n = p.x.length;
   const v = emptyValues();
+  const areas = new Map<number, number>();
   let vol = 0;
   let momX = 0;
   let momZ = 0;
@@ -95,12 +116,11 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   let iT = 0;
   let ws = 0;
   let yMax = 0;
-  for (let i = 0; i < n; i++) {
-    sections[i]!.evaluate(draft, v);
-    const w = weights[i]!;
-    const dx = x[i]! - xm; // moments about amidships keep the sums well conditioned
+  for (const o of plan.ordinates) {
+    ordinateValues(p, o, draft, v);
+    const w = o.weight;
+    const dx = o.x - xm; // moments about amidships keep the sums well conditioned
     const y = v.halfBreadth;
-    areas[i] = v.area;
     vol += w * v.area;
     momX += w * v.area * dx;
     momZ += w * v.momentZ;
@@ -108,21 +128,26 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
     awX += w * y * dx;
     awXX += w * y * dx * dx;
     iT += w * y * y * y;
-    ws += w * v.wettedGirth;
     if (y > yMax) yMax = y;
+    if (o.kind === 'station') {
+      areas.set(o.a, v.area);
+      const wf = p.forward[o.a] === undefined ? 0 : o.weightForward;
+      ws += (w - wf) * v.wettedGirth;
+      if (wf > 0) ws += wf * forwardWettedGirth(p, o, draft, v);
+    } else ws += w * v.wettedGirth;
   }
   // Immersed end faces (a transom, a square bow) are part of the wetted surface.
-  ws += areas[0]! + areas[n - 1]!;
+  ws += (areas.get(0) ?? 0) + (areas.get(n - 1) ?? 0);
   const particulars = particularsFromIntegrals(
     { volume: vol, momentX: momX, momentZ: momZ, waterplaneArea: 2 * aw, waterplaneMomentX: 2 * awX, waterplaneSecondMomentX: 2 * awXX, iT: (2 / 3) * iT },
     xm,
     p.perp.lbp,
     density,
   );
-  const ends = waterlineEnds(p, draft);
-  const lwl = ends.fwd - ends.aft;
+  const endXs = plan.ends.map((e) => e.x);
+  const lwl = Math.max(...endXs) - Math.min(...endXs);
   const bwl = 2 * yMax;
-  const am = midshipArea(p, areas);
+  const am = midshipArea(p, plan, (i) => areas.get(i) ?? p.sections[i]!.evaluate(draft).area);
   const ratio = (a: number, b: number): number => (b > 0 ? a / b : Number.NaN);
   return {
     draft,
@@ -153,6 +178,5 @@ export function hydrostaticTable(p: PreparedHull, drafts: readonly number[], den
     }
   });
   if (issues.length > 0) throw new HalfbreadthError(issues);
-  const scratch = scratchFor(p);
-  return drafts.map((d) => hydrostaticsAt(p, d, density, scratch));
+  return drafts.map((d) => hydrostaticsAt(p, d, density));
 }

@@ -55,7 +55,11 @@ const VerticalSheetSchema = z
   .describe('the vertical sheet of a station: its immersed area set out as ordinates, multipliers and products');
 
 const SheetStationSchema = z.object({
-  x: z.number().describe('station position, m'),
+  kind: z
+    .enum(['station', 'end', 'between'])
+    .describe('a station; the end of the waterline between two stations; or the middle ordinate of a piece, read between two stations'),
+  note: z.string().nullable().describe('for an end or middle line, where its values are read from; null for a station'),
+  x: z.number().describe('position of the ordinate, m'),
   lever: z.number().describe('x - amidships, m'),
   halfBreadth: z.number().describe('half-breadth at the waterline, m'),
   area: z.number().describe('immersed sectional area, both sides, m2'),
@@ -69,8 +73,17 @@ const SheetStationSchema = z.object({
   ySMLever2: z.number().describe('y x SM x lever^2, m3 (longitudinal second moment product)'),
   y3SM: z.number().describe('y^3 x SM, m3 (transverse second moment product)'),
   multiplierText: z.string().describe('the multiplier as the trade writes it (1, 4, 1 1/2 ...)'),
-  vertical: VerticalSheetSchema,
+  vertical: VerticalSheetSchema.nullable(),
 });
+
+const SheetPieceSchema = z
+  .object({
+    from: z.number().describe('x where the piece starts, m'),
+    to: z.number().describe('x where the piece ends, m'),
+    rule: z.string().describe('the rule the piece is integrated by, in words'),
+    lines: z.array(z.number().int()).describe('indices into stations of the ordinates the piece uses'),
+  })
+  .describe('a piece of the integration along the length');
 
 const SheetTotalsSchema = z
   .object({
@@ -103,7 +116,9 @@ export const SheetResultSchema = z
     commonFactor: z.number().describe('h/3, m'),
     amidships: z.number().describe('x of amidships, (ap + fp) / 2, the origin of the levers, m'),
     caution: CautionField,
-    stations: z.array(SheetStationSchema),
+    stations: z.array(SheetStationSchema).describe('the lines of the sheet in x order: immersed stations, waterline ends and middle ordinates'),
+    pieces: z.array(SheetPieceSchema).describe('the pieces of the integration along the length, with their rules'),
+    ends: z.array(z.string()).describe('where the waterline ends, aft and forward, in words'),
     totals: SheetTotalsSchema,
     results: SheetResultsSchema,
   })
@@ -118,9 +133,10 @@ export const sheet: Computation<Params, SheetResult> = {
   name: 'sheet',
   summary: 'Calculation sheet at a draft',
   description:
-    'The hydrostatics at one draft set out as a calculation sheet: for each station its lever from amidships, half-breadth at the ' +
-    'waterline, immersed area and its moment, Simpson\'s multiplier and the products; the sums, the common factor h/3 and the ' +
-    'particulars they give; and each station\'s vertical sheet. The CSV holds the longitudinal sheet.',
+    'The hydrostatics at one draft set out as a calculation sheet: for each immersed station (and where the waterline ends between ' +
+    'stations, the end and the middle of the end piece) its lever from amidships, half-breadth at the waterline, immersed area and ' +
+    'its moment, Simpson\'s multiplier and the products; the pieces of the integration and their rules; the sums, the common factor ' +
+    'h/3 and the particulars they give; and each station\'s vertical sheet. The CSV holds the longitudinal sheet.',
   query: z.object({ draft: DraftQuery, density: DensityQuery }),
   body: z.object({ draft: DraftBody, density: DensityBody }),
   result: SheetResultSchema,

@@ -59,7 +59,7 @@ describe('sheet', () => {
     const csv = await run(['sheet', LAUNCH, '--draft', '0.45', '--format', 'csv']);
     expect(csv.out.split('\r\n')[0]).toBe(`# ${CAUTION}`);
     const rows = csvRows(csv.out);
-    expect(rows[rows.length - 1]!['x_m']).toBe('sum');
+    expect(rows[rows.length - 1]!['kind']).toBe('sum');
     const table = await run(['sheet', LAUNCH, '--draft', '0.45', '--format', 'table']);
     expect(table.out).toContain('volume = h/3 x sum(A.SM) =');
     expect(table.out.trimEnd().endsWith(CAUTION)).toBe(true);

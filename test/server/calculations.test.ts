@@ -103,13 +103,15 @@ describe('POST /v1/sheet', () => {
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toBe(JSON_TYPE);
     const body = JSON.parse(res.body);
-    expect(Object.keys(body)).toEqual(['hull', 'draft', 'density', 'spacing', 'commonFactor', 'amidships', 'caution', 'stations', 'totals', 'results']);
+    expect(Object.keys(body)).toEqual(['hull', 'draft', 'density', 'spacing', 'commonFactor', 'amidships', 'caution', 'stations', 'pieces', 'ends', 'totals', 'results']);
     expect(body.caution).toBe(CAUTION);
     expect(body.draft).toBe(1.3);
     expect(body.density).toBe(1);
-    expect(body.stations).toHaveLength(workboat.stations.length);
+    // One line per station whose lowest point lies below the waterline, read from the model's own points.
+    const immersed = workboat.stations.filter((st) => Math.min(...st.points.map((pt) => pt.z)) < 1.3).length;
+    expect(body.stations.filter((l: { kind: string }) => l.kind === 'station')).toHaveLength(immersed);
     expect(Object.keys(body.stations[0])).toEqual([
-      'x', 'lever', 'halfBreadth', 'area', 'momentZ', 'multiplier', 'areaSM', 'areaSMLever', 'momentZSM', 'ySM', 'ySMLever', 'ySMLever2', 'y3SM', 'multiplierText', 'vertical',
+      'kind', 'note', 'x', 'lever', 'halfBreadth', 'area', 'momentZ', 'multiplier', 'areaSM', 'areaSMLever', 'momentZSM', 'ySM', 'ySMLever', 'ySMLever2', 'y3SM', 'multiplierText', 'vertical',
     ]);
     expect(body).toEqual(asJson(sheetResult(workboat, calculationSheet(workboatPrepared, 1.3, 1.0))));
   });

@@ -20,6 +20,7 @@ import Papa from 'papaparse';
 import { describe, expect, test } from 'vitest';
 import { CAUTION } from '../../core/common/caution.js';
 import { calculationSheet } from '../../core/upright/calculationSheet.js';
+import { verticalSheet } from '../../core/upright/verticalSheet.js';
 import { HalfbreadthError } from '../../core/common/errors.js';
 import { sheetCsv, sheetResult, sheetText } from '../../core/report/formatSheet.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
@@ -170,6 +171,7 @@ describe('the vertical sheets', () => {
       for (const d of drafts) {
         const sheet = calculationSheet(p, d);
         sheet.verticals.forEach((v, i) => {
+          if (v === null) return; // an end or middle line: no station of its own
           expect(v.area, `${file} station ${i} at ${d} m`).toBeRelClose(v.sectionArea, 1e-12, 1e-15);
           expect(v.sectionArea, `${file} station ${i} at ${d} m against the longitudinal sheet`).toBe(sheet.stations[i]!.area);
         });
@@ -225,11 +227,17 @@ describe('the vertical sheets', () => {
     expect(v.ordinates[0]!.multiplier).toBeNull();
   });
 
-  test('a station whose keel is above the draft has an empty sheet', () => {
-    const v = calculationSheet(prepareHull(demo('workboat.csv')), 0.5).verticals[0]!;
+  test('a station whose keel is above the draft has an empty sheet, and no line on the longitudinal sheet', () => {
+    const p = prepareHull(demo('workboat.csv'));
+    // The workboat's transom station (x = 0) has its keel above 0.5 m (the file's first row).
+    expect(p.keel[0]).toBeGreaterThan(0.5);
+    const v = verticalSheet(p.hull.stations[0]!.points, p.sections[0]!, 0.5);
     expect(v.immersed).toBe(false);
     expect(v.ordinates).toHaveLength(0);
     expect(v.area).toBe(0);
+    const sheet = calculationSheet(p, 0.5);
+    expect(sheet.stations.some((s) => s.kind === 'station' && s.x === p.x[0])).toBe(false);
+    expect(sheet.stations[0]!.kind).toBe('end');
   });
 });
 
@@ -241,7 +249,7 @@ describe('the sheet in its forms', () => {
     expect(r.caution).toBe(CAUTION);
     expect(r.spacing).toBeRelClose(1, 1e-15);
     expect(r.stations[1]).toMatchObject({ x: 1, multiplier: 4, multiplierText: '4', halfBreadth: 2 });
-    expect(r.stations[1]!.vertical.ordinates.map((o) => o.multiplierText)).toEqual(['1', '4', '1']);
+    expect(r.stations[1]!.vertical!.ordinates.map((o) => o.multiplierText)).toEqual(['1', '4', '1']);
     expect(r.totals.areaSM).toBeRelClose(4 * 30, 1e-13); // area 4 m2 x sum of multipliers 30
   });
 
@@ -251,10 +259,10 @@ describe('the sheet in its forms', () => {
     expect(csv).toContain('# h = 1 m (the most common station interval); h/3 = 0.3333333333 m');
     expect(csv).toContain('# volume = h/3 x sum(A.SM) = 40 m3');
     const rows = Papa.parse<string[]>(csv.split('\r\n').filter((l) => !l.startsWith('#')).join('\n'), { skipEmptyLines: true }).data;
-    expect(rows[0]!.slice(0, 6)).toEqual(['x_m', 'lever_m', 'halfBreadth_m', 'area_m2', 'momentZ_m3', 'multiplier']);
+    expect(rows[0]!.slice(0, 7)).toEqual(['kind', 'x_m', 'lever_m', 'halfBreadth_m', 'area_m2', 'momentZ_m3', 'multiplier']);
     expect(rows).toHaveLength(1 + 11 + 1);
     expect(rows[12]![0]).toBe('sum');
-    expect(Number(rows[12]![6])).toBeRelClose(120, 1e-13);
+    expect(Number(rows[12]![7])).toBeRelClose(120, 1e-13);
   });
 
   test('the text form shows the multipliers as fractions, the formulae and the caution', () => {
