@@ -175,10 +175,14 @@ const boat = {
     const p = Math.log(this.dwl / this.deck) / Math.log((this.fpX - a) / (this.stemHeadX - a));
     return this.deck * ((x - a) / (this.stemHeadX - a)) ** p;
   },
-  /** Half-width of the flat at the keel: 0.80 m across the transom, 0.30 m flat of keel, 0.03 m stem bar. */
+  /**
+   * Half-width of the flat at the keel: 0.80 m across the transom, 0.30 m flat of keel,
+   * narrowing to nothing where the keel rises into the stem (x = 12.6 m on), so the
+   * sections there start from the keel point on the centreline that keel_z gives.
+   */
   flatY(x) {
     if (x < this.runX) return 0.3 + 0.5 * (1 - x / this.runX) ** 1.5;
-    return 0.03 + 0.27 * (1 - smoothstep((x - 7.0) / 5.5));
+    return (0.03 + 0.27 * (1 - smoothstep((x - 7.0) / 5.5))) * (1 - smoothstep((x - this.forefootX) / 1.4));
   },
   /** Deck-edge half-breadth: 2.30 m from x = 6 to 7 m, 1.95 m at the transom, 0 at the stem head. */
   deckY(x) {
@@ -212,7 +216,9 @@ function boatTable() {
     // A cell is defined from the first tabulated waterline at or above the keel (a
     // millimetre of tolerance) up to the deck edge; below that the station has no surface.
     const cells = WATERLINES.map((z) => (z >= mm(zk) && z <= boat.deck ? mm(boat.halfBreadth(x, z)) : null));
-    return { x, cells };
+    // The keel (rabbet) height of every station, as a table of offsets gives it: where it
+    // falls on a tabulated waterline it confirms the flat of keel there.
+    return { x, keel: mm(zk), cells };
   });
 }
 
@@ -229,12 +235,13 @@ function checkGrid(waterlines, rows, label) {
     check(first >= 0 && last - first + 1 >= 2, `${label}: at least 2 defined cells at station ${x}`);
     for (let k = first; k <= last; k++) check(defined[k], `${label}: blank inside the row at station ${x}`);
     for (const c of cells) if (c !== null) check(Number.isFinite(c) && c >= 0, `${label}: half-breadth >= 0 at station ${x}`);
+    check(rows[i].keel <= waterlines[first], `${label}: keel at or below the lowest half-breadth at station ${x}`);
   }
 }
 
 function gridCsv(meta, waterlines, rows, fmt) {
-  const lines = [...meta, ['x', ...waterlines.map(fmt)].join(',')];
-  for (const { x, cells } of rows) lines.push([fmt(x), ...cells.map((c) => (c === null ? '' : fmt(c)))].join(','));
+  const lines = [...meta, ['x', 'keel_z', ...waterlines.map(fmt)].join(',')];
+  for (const { x, keel, cells } of rows) lines.push([fmt(x), fmt(keel), ...cells.map((c) => (c === null ? '' : fmt(c)))].join(','));
   return lines.join('\n') + '\n';
 }
 
@@ -282,7 +289,7 @@ checkGrid(WATERLINES, rows, 'workboat');
 // The imperial table keeps its order after rounding to sixteenths.
 const wlSixteenths = WATERLINES.map((z) => sixteenths(ftIn8(z)));
 const xSixteenths = rows.map((r) => sixteenths(ftIn8(r.x)));
-checkGrid(wlSixteenths, rows.map((r, i) => ({ x: xSixteenths[i], cells: r.cells })), 'workboat-ftin');
+checkGrid(wlSixteenths, rows.map((r, i) => ({ x: xSixteenths[i], keel: sixteenths(ftIn8(r.keel)), cells: r.cells })), 'workboat-ftin');
 
 const boatMeta = (units, ap, fp) => [
   '# name: Kestrow Mule - 14 m steel workboat (invented demo hull)',

@@ -7,13 +7,11 @@ import { HalfbreadthError } from '../core/common/errors.js';
 import type { HullModel } from '../core/hull/hullModel.js';
 import { prepareHull, type PreparedHull } from '../core/hull/preparedHull.js';
 import { readHullJson, readOffsetsCsv } from '../core/offsets/readOffsets.js';
+import type { ReadingWarning } from '../core/offsets/readingWarnings.js';
 import type { HullForm } from './store/hullStore.js';
 
 /** A hull read and made ready for computation. */
-export interface LoadedHull {
-  readonly hull: HullModel;
-  readonly form: HullForm;
-  readonly units: string;
+export interface LoadedHull extends ReadHull {
   readonly prepared: PreparedHull;
 }
 
@@ -21,16 +19,30 @@ export interface ReadHull {
   readonly hull: HullModel;
   readonly form: HullForm;
   readonly units: string;
+  /** Warnings about how the offsets file is written (none for a JSON model); asked for by the check only. */
+  readonly notes: () => readonly ReadingWarning[];
 }
 
 export function hullFromCsv(text: string): ReadHull {
   const r = readOffsetsCsv(text);
-  return { hull: r.hull, form: r.form, units: r.units };
+  return { hull: r.hull, form: r.form, units: r.units, notes: () => r.notes };
+}
+
+/**
+ * The notes of a stored upload, found by reading its text again when asked for (the
+ * store keeps the model read from it, not the notes).
+ */
+export function notesOfSource(mediaType: string, bytes: () => Buffer | undefined): () => readonly ReadingWarning[] {
+  return () => {
+    if (mediaType !== 'text/csv') return [];
+    const b = bytes();
+    return b === undefined ? [] : readOffsetsCsv(b.toString('utf8')).notes;
+  };
 }
 
 export function hullFromJson(offsets: unknown): ReadHull {
   try {
-    return { hull: readHullJson(offsets), form: 'model', units: 'm' };
+    return { hull: readHullJson(offsets), form: 'model', units: 'm', notes: () => [] };
   } catch (e) {
     if (!(e instanceof HalfbreadthError)) throw e;
     // readHullJson's messages begin with the path in the model ("stations[2].x: ...", "the hull: ...").

@@ -6,6 +6,7 @@
 import { CAUTION } from '../../core/common/caution.js';
 import { HalfbreadthError, type Issue } from '../../core/common/errors.js';
 import { fairnessWarnings } from '../../core/fairness/fairness.js';
+import { proportionWarnings } from '../../core/offsets/readingWarnings.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv, type ReadResult } from '../../core/offsets/readOffsets.js';
@@ -23,10 +24,16 @@ export interface Warning {
 }
 
 /**
- * The checks that find warnings in a hull that reads without error: the fairness of the
- * offsets (core/fairness/fairness.ts; each warning also gives x, z, value and a suggested value).
+ * The checks that find warnings in a hull that reads without error: how the table was
+ * written (a keel taken at a tabulated waterline, proportions that suggest the wrong
+ * unit; core/offsets/readingWarnings.ts) and the fairness of the offsets
+ * (core/fairness/fairness.ts; each warning also gives x, z, value and a suggested value).
  */
-export const WARNING_CHECKS: readonly ((hull: HullModel) => readonly Warning[])[] = [fairnessWarnings];
+export const WARNING_CHECKS: readonly ((read: ReadResult) => readonly Warning[])[] = [
+  (read) => read.notes,
+  (read) => proportionWarnings(read.hull, read.units),
+  (read) => fairnessWarnings(read.hull),
+];
 
 /** What `check` reports of a sound file. Lengths in metres, whatever the file's units. */
 export interface Particulars {
@@ -111,7 +118,9 @@ export const check: Command = {
 units, stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge
 heights, and the drafts a hydrostatic table of it may use) or every error
 found, each with its line and column. It also warns of offsets that are not
-fair: a bump or hollow in a waterline or a section, with a fair value.
+fair (a bump or hollow in a waterline or a section, with a fair value), of a
+keel taken at a tabulated waterline where a keel_z column would place it,
+and of proportions that suggest the wrong unit (no vessel is over 400 m).
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input
@@ -124,9 +133,10 @@ Forms:
   table   the particulars as lines on stdout; errors and warnings on stderr
   json    { "errors": [...], "warnings": [...], "particulars": {...} | null,
           "caution": "..." } on stdout; each error is { code, path, message };
-          each warning { code, path, x, z, value, suggested, message }: an
-          offset that is not fair along its waterline or section, with a fair
-          value from its neighbours; errors and warnings also go to stderr
+          each warning { code, path, message }, and for an offset that is
+          not fair along its waterline or section also x, z, value and a
+          fair value from its neighbours; errors and warnings also go to
+          stderr
 
 Exit status: 0 when the file reads without error, 2 when it has errors.`,
   async run(args: CommandArgs, io: CliIo): Promise<number> {
@@ -142,7 +152,7 @@ Exit status: 0 when the file reads without error, 2 when it has errors.`,
       if (!(e instanceof HalfbreadthError)) throw e;
       errors = e.issues;
     }
-    const warnings = read === undefined ? [] : WARNING_CHECKS.flatMap((f) => f(read.hull));
+    const warnings = read === undefined ? [] : WARNING_CHECKS.flatMap((f) => f(read));
     const found = read === undefined ? null : particulars(read);
     if (errors.length > 0) io.stderr.write(issueLines(errors, input.label, program).join('\n') + '\n');
     if (warnings.length > 0) io.stderr.write(warnings.map((w) => terminalSafe(`${input.label}: warning: ${w.message}`)).join('\n') + '\n');

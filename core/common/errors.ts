@@ -23,6 +23,7 @@ export const ERROR_CODES = {
   HYD_X_NOT_INCREASING: 'Station x positions are not strictly increasing down the file.',
   HYD_Z_NOT_INCREASING: 'Waterline heights (or the z of a section\'s points) are not increasing.',
   HYD_BLANK_INSIDE_ROW: 'A blank cell lies between defined cells of a station.',
+  HYD_KEEL_DECK: 'A keel_z, deck_z or deck_y cell of the grid form breaks its rule (keel above the lowest half-breadth, cells above the deck edge, deck height without half-breadth).',
   HYD_STATION_TOO_FEW_POINTS: 'A station has fewer than two defined points.',
   HYD_TOO_FEW_STATIONS: 'The hull has fewer than three stations.',
   HYD_KNUCKLE_VALUE: 'A knuckle cell holds something other than 0 or 1.',

@@ -49,7 +49,9 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
       const r = map.stationRow[i]!;
       const c = map.pointCol[i]![j]!;
       const text = field === 'z' ? header[c] : cellText(rows[r]!, c);
-      return { line: st.line, column: c + 1, where: `${st.where}, WL ${header[c]}${label}`, text };
+      // A keel or deck-edge point comes from its own column (keel_z, deck_y), not a waterline.
+      const place = c < map.first ? `${header[c]}` : `WL ${header[c]}${label}`;
+      return { line: st.line, column: c + 1, where: `${st.where}, ${place}`, text };
     }
     const r = map.pointRow[i]![j]!;
     const zt = cellText(rows[r]!, map.zCol);
@@ -57,7 +59,8 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
     const text = field === 'z' ? zt : cellText(rows[r]!, map.yCol);
     return { line: rowLines[r], column, where: `${st.where}, point z = ${zt}${label}`, text };
   };
-  const waterlineSpot = (k: number): Spot => ({ line: headerLine, column: k + 2, where: `WL ${header[k + 1]}${label}`, text: header[k + 1] });
+  const firstWl = map.form === 'grid' ? map.first : 1;
+  const waterlineSpot = (k: number): Spot => ({ line: headerLine, column: k + firstWl + 1, where: `WL ${header[k + firstWl]}${label}`, text: header[k + firstWl] });
 
   const spotOf = (path: readonly (string | number)[]): Spot => {
     const [head, i, sub, j, field] = path;

@@ -5,6 +5,7 @@
 import type { Issue } from '../common/errors.js';
 import type { Station } from '../hull/hullModel.js';
 import type { LengthUnit } from '../common/units.js';
+import type { ReadingWarning } from './readingWarnings.js';
 
 export interface Sheet {
   readonly unit: LengthUnit;
@@ -36,7 +37,13 @@ export const cellText = (row: readonly string[], c: number): string => {
  * (0-based) of x, y and z.
  */
 export type SourceMap =
-  | { readonly form: 'grid'; readonly stationRow: readonly number[]; readonly pointCol: readonly (readonly number[])[] }
+  | {
+      readonly form: 'grid';
+      readonly stationRow: readonly number[];
+      readonly pointCol: readonly (readonly number[])[];
+      /** Column (0-based) of the first waterline height: 1, or more after the optional columns. */
+      readonly first: number;
+    }
   | {
       readonly form: 'points';
       /** Row where each station begins. */
@@ -58,4 +65,6 @@ export interface BodyRead {
   readonly rowsLeftOut: boolean;
   /** True when reading stopped (the table is over a size limit). */
   readonly stopped: boolean;
+  /** Warnings about how the table is written (core/offsets/readingWarnings.ts). */
+  readonly notes?: readonly ReadingWarning[];
 }

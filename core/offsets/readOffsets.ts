@@ -21,6 +21,7 @@ import { placeHullIssues } from './offsetsPlaces.js';
 import { readPointsBody, readPointsHeader } from './offsetsPoints.js';
 import { unitLabel, type BodyRead, type Sheet } from './offsetsSheet.js';
 import { lengthFactor, type LengthUnit } from '../common/units.js';
+import type { ReadingWarning } from './readingWarnings.js';
 
 export { readHullJson } from './readHullJson.js';
 
@@ -32,6 +33,8 @@ export interface ReadResult {
   readonly form: OffsetsForm;
   /** The unit the file was written in. */
   readonly units: LengthUnit;
+  /** Warnings about how the table is written (core/offsets/readingWarnings.ts); the hull reads all the same. */
+  readonly notes: readonly ReadingWarning[];
 }
 
 const HASH = 35;
@@ -170,9 +173,8 @@ export function readOffsetsCsv(text: string): ReadResult {
       issues.push(csvIssue('HYD_TOO_LARGE', undefined, undefined, undefined, `the file has ${lines.body.length} station rows; the limit is ${LIMITS.maxStations}`));
       fail(issues);
     }
-    const heights = gh.waterlines;
-    waterlines = heights;
-    readBody = (sheet) => readGridBody(sheet, heights);
+    waterlines = gh.waterlines;
+    readBody = (sheet) => readGridBody(sheet, gh);
   } else {
     const ph = readPointsHeader(names, lines.headerLine);
     issues.push(...ph.issues);
@@ -194,5 +196,5 @@ export function readOffsetsCsv(text: string): ReadResult {
   const found = checkHull(hull);
   if (found.length > 0) issues.push(...placeHullIssues(found, { sheet, body, meta, hull }));
   if (issues.length > 0) fail(issues);
-  return { hull, form, units };
+  return { hull, form, units, notes: body.notes ?? [] };
 }

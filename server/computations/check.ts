@@ -8,6 +8,7 @@ import { z } from 'zod';
 import { CAUTION } from '../../core/common/caution.js';
 import type { HalfbreadthError } from '../../core/common/errors.js';
 import { fairnessWarnings, type FairnessWarning } from '../../core/fairness/fairness.js';
+import { proportionWarnings, type ReadingWarning } from '../../core/offsets/readingWarnings.js';
 import { hullSummary, type HullSummary } from '../../core/report/formatHydrostatics.js';
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
@@ -22,7 +23,7 @@ const ParticularsSchema = z.object({
   lowestDeck: z.number().describe('z of the lowest deck edge, m: drafts may not lie above it'),
 });
 
-const WarningSchema = z
+const FairnessWarningSchema = z
   .object({
     code: z.literal('HYD_UNFAIR_OFFSET'),
     path: z.array(z.union([z.string(), z.number()])).describe('where in the hull model'),
@@ -36,13 +37,23 @@ const WarningSchema = z
   })
   .describe('an offset that makes a bump or a hollow in its waterline or section: a warning, not an error');
 
+const ReadingWarningSchema = z
+  .object({
+    code: z.enum(['HYD_KEEL_AT_WATERLINE', 'HYD_PROPORTIONS']),
+    path: z.array(z.union([z.string(), z.number()])).describe('where in the hull model'),
+    message: z.string(),
+  })
+  .describe('how the table is written: a keel taken at a tabulated waterline, or proportions that suggest the wrong unit or swapped columns');
+
+const WarningSchema = z.union([ReadingWarningSchema, FairnessWarningSchema]);
+
 export const CheckResultSchema = z
   .object({
     valid: z.boolean(),
     hull: HullSummarySchema.nullable(),
     particulars: ParticularsSchema.nullable(),
     issues: z.array(z.object({ code: z.string(), path: z.array(z.union([z.string(), z.number()])), message: z.string() })),
-    warnings: z.array(WarningSchema).describe('offsets that look unfair (none when the offsets are not valid)'),
+    warnings: z.array(WarningSchema).describe('how the table is written, and offsets that look unfair (none when the offsets are not valid)'),
     caution: CautionField,
   })
   .describe('whether the offsets make a sound hull, and what it is');
@@ -52,7 +63,7 @@ interface CheckResult {
   hull: HullSummary | null;
   particulars: z.infer<typeof ParticularsSchema> | null;
   issues: { code: string; path: (string | number)[]; message: string }[];
-  warnings: readonly FairnessWarning[];
+  warnings: readonly (FairnessWarning | ReadingWarning)[];
   caution: string;
 }
 
@@ -71,12 +82,19 @@ export const check: Computation<Record<string, never>, CheckResult> = {
   summary: 'Check offsets',
   description:
     'Whether the offsets make a sound hull, with every issue (line and column, or field) when they do not, and the hull\'s particulars ' +
-    'and any offsets that look unfair (warnings) when they do.',
+    'and warnings when they do: a keel taken at a tabulated waterline, proportions that suggest the wrong unit, offsets that look unfair.',
   query: z.object({}),
   body: z.object({}),
   result: CheckResultSchema,
   key: () => '',
-  run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], warnings: fairnessWarnings(h.hull), caution: CAUTION }),
+  run: (h) => ({
+    valid: true,
+    hull: hullSummary(h.hull),
+    particulars: particulars(h),
+    issues: [],
+    warnings: [...h.notes(), ...proportionWarnings(h.hull, h.units), ...fairnessWarnings(h.hull)],
+    caution: CAUTION,
+  }),
   invalid: (err: HalfbreadthError) => ({
     valid: false,
     hull: null,

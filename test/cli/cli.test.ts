@@ -274,9 +274,10 @@ describe('bad input', () => {
   });
 
   test('every draft outside the hull is named, and nothing is written to stdout', async () => {
-    // The workboat's baseline is z = 0 and its deck edge z = 2.2 m (its own header row).
+    // The workboat's baseline is z = 0 and its deck edge z = 2.2 m (its own header row,
+    // whose cells after x and keel_z are the waterline heights).
     const header = readFileSync(WORKBOAT, 'utf8').split('\n').find((l) => l.startsWith('x,'))!;
-    const top = Math.max(...header.split(',').slice(1).map(Number));
+    const top = Math.max(...header.split(',').slice(2).map(Number));
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', `0,1,${top + 0.5},${top + 1}`]);
     expect(r.code).toBe(2);
     expect(r.out).toBe('');
@@ -413,26 +414,33 @@ describe('check', () => {
     expect(j.errors).toEqual([]);
     expect(j.warnings).toEqual([]);
     expect(j.caution).toBe(CAUTION);
+    // The header is x, keel_z, then the waterline heights (the conventions' grid form).
     const header = readFileSync(WORKBOAT, 'utf8').split('\n').find((l) => l.startsWith('x,'))!.split(',');
+    expect(header[1]).toBe('keel_z');
+    const heights = header.slice(2).map(Number);
     const ap = Number(metadata(WORKBOAT, 'ap'));
     const fp = Number(metadata(WORKBOAT, 'fp'));
-    const rows = dataLines(WORKBOAT);
-    const defined = rows.reduce((n, l) => n + l.split(',').slice(1).filter((c) => c.trim() !== '').length, 0);
+    const rows = dataLines(WORKBOAT).map((l) => l.split(','));
+    // A point per defined half-breadth, and one more where the keel lies below the lowest of them.
+    const points = rows.reduce((n, cells) => {
+      const defined = cells.slice(2).map((c, k) => (c.trim() === '' ? undefined : heights[k]!)).filter((z) => z !== undefined);
+      return n + defined.length + (Number(cells[1]) < Math.min(...defined) ? 1 : 0);
+    }, 0);
     expect(j.particulars).toMatchObject({
       name: metadata(WORKBOAT, 'name'),
       form: 'grid',
       units: 'm',
       stations: rows.length,
-      waterlines: header.length - 1,
-      points: defined,
+      waterlines: heights.length,
+      points,
       ap,
       fp,
       lbp: fp - ap,
       amidships: (ap + fp) / 2,
     });
-    // The lowest keel: the lowest waterline holding a value in any row; the deck edge: the header's top.
-    const lowestKeel = Math.min(...rows.map((l) => Number(header[l.split(',').findIndex((c, k) => k > 0 && c.trim() !== '')])));
-    expect(j.particulars['drafts']).toEqual({ above: lowestKeel, atMost: Number(header[header.length - 1]) });
+    // The lowest keel: the lowest keel_z; the deck edge: the header's top.
+    const lowestKeel = Math.min(...rows.map((cells) => Number(cells[1])));
+    expect(j.particulars['drafts']).toEqual({ above: lowestKeel, atMost: heights[heights.length - 1] });
   });
 
   test('a sound points file as a table', async () => {
