@@ -29,6 +29,7 @@ export const HydrostaticResultSchema = z
     density: z.number().describe('water density, t/m3'),
     caution: CautionField,
     rows: z.array(HydrostaticRowSchema),
+    notes: z.array(z.string()).describe('why a coefficient is null at a draft: a ratio that would exceed 1, or nothing immersed at amidships'),
   })
   .describe('the upright hydrostatic table, one row per draft');
 

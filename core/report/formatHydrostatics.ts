@@ -7,6 +7,7 @@ import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
 import { csvSafeText } from '../common/csvSafe.js';
 import { alignedTable, textCell } from './textTable.js';
+import { coefficientNotes } from '../upright/coefficientNotes.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from '../upright/hydrostaticFields.js';
 import { perpendiculars, type HullModel } from '../hull/hullModel.js';
 
@@ -30,10 +31,12 @@ export interface HydrostaticResult {
   density: number;
   caution: string;
   rows: HydrostaticRow[];
+  /** Why a coefficient is not given at a draft (core/upright/coefficientNotes.ts); empty when every one is. */
+  notes: string[];
 }
 
 export function hydrostaticResult(hull: HullModel, density: number, rows: HydrostaticRow[]): HydrostaticResult {
-  return { hull: hullSummary(hull), density, caution: CAUTION, rows };
+  return { hull: hullSummary(hull), density, caution: CAUTION, rows, notes: coefficientNotes(rows) };
 }
 
 const UNIT_SLUG: Record<string, string> = { m: 'm', m2: 'm2', m3: 'm3', m4: 'm4', t: 't', 't/cm': 't_per_cm', 't.m/cm': 'tm_per_cm', '-': '' };
@@ -66,7 +69,7 @@ export function csvPreamble(lines: readonly string[]): string {
 export function hydrostaticsCsv(result: HydrostaticResult): string {
   const header = HYDROSTATIC_FIELDS.map((f) => csvHeader(f.key, f.unit));
   const data = result.rows.map((r) => HYDROSTATIC_FIELDS.map((f) => (Number.isFinite(r[f.key]) ? r[f.key] : '')));
-  const preamble = csvPreamble([`hull: ${csvSafeText(result.hull.name)}`, `density: ${result.density} t/m3`]);
+  const preamble = csvPreamble([`hull: ${csvSafeText(result.hull.name)}`, `density: ${result.density} t/m3`, ...result.notes]);
   return preamble + Papa.unparse({ fields: header, data }, { newline: '\r\n' }) + '\r\n';
 }
 
@@ -74,5 +77,5 @@ export function hydrostaticsCsv(result: HydrostaticResult): string {
 export function hydrostaticsText(result: HydrostaticResult): string {
   const columns = HYDROSTATIC_FIELDS.map((f) => ({ label: f.label, unit: f.unit, cells: result.rows.map((r) => textCell(r[f.key], f.unit)) }));
   const title = `${result.hull.name}: ${result.hull.stations} stations, LBP ${result.hull.lbp.toFixed(3)} m, density ${result.density} t/m3`;
-  return alignedTable([title], columns, result.rows.length);
+  return alignedTable([title], columns, result.rows.length, result.notes);
 }

@@ -23,7 +23,8 @@ export interface TextColumn {
   readonly cells: readonly string[];
 }
 
-export function alignedTable(preamble: readonly string[], columns: readonly TextColumn[], rowCount: number): string {
+/** The table with `preamble` lines above it and `notes` under it, before the caution. */
+export function alignedTable(preamble: readonly string[], columns: readonly TextColumn[], rowCount: number, notes: readonly string[] = []): string {
   const cols = columns.map((c) => {
     const unit = c.unit === '-' ? '' : c.unit;
     const width = Math.max(c.label.length, unit.length, ...c.cells.map((s) => s.length));
@@ -34,6 +35,7 @@ export function alignedTable(preamble: readonly string[], columns: readonly Text
     cols.map((c) => c.head).join('  '),
     cols.map((c) => c.unit).join('  '),
     ...Array.from({ length: rowCount }, (_, i) => cols.map((c) => c.cells[i]).join('  ')),
+    ...(notes.length > 0 ? ['', ...notes] : []),
     '',
     CAUTION,
   ];

@@ -26,6 +26,7 @@ import { particularsFromIntegrals } from './particulars.js';
 import { valuesBetween } from '../hull/betweenStations.js';
 import { emptyValues } from '../hull/section.js';
 import { isSpacingStep } from '../quadrature/lengthPanels.js';
+import { coefficient } from './coefficientNotes.js';
 import { forwardWettedGirth, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
 
 /** Check that a draft lies within the hull; the path names it in the request. */
@@ -148,7 +149,7 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   const lwl = Math.max(...endXs) - Math.min(...endXs);
   const bwl = 2 * yMax;
   const am = midshipArea(p, plan, (i) => areas.get(i) ?? p.sections[i]!.evaluate(draft).area);
-  const ratio = (a: number, b: number): number => (b > 0 ? a / b : Number.NaN);
+  const ratio = coefficient;
   return {
     draft,
     ...particulars,

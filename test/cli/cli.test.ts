@@ -155,7 +155,7 @@ describe('hydrostatics as a table and as JSON', () => {
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', DRAFTS, '--format', 'json'], { tty: true });
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as { hull: Record<string, unknown>; density: number; caution: string; rows: Record<string, number | null>[] };
-    expect(Object.keys(j)).toEqual(['hull', 'density', 'caution', 'rows']);
+    expect(Object.keys(j)).toEqual(['hull', 'density', 'caution', 'rows', 'notes']);
     expect(j.caution).toBe(CAUTION);
     expect(j.density).toBe(1.025);
     expect(j.hull['name']).toBe(metadata(WORKBOAT, 'name'));

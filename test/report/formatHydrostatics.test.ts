@@ -122,7 +122,7 @@ describe('hydrostatic CSV', () => {
 describe('hydrostatic JSON', () => {
   test('a result has hull, density, caution and rows with the conventions field names', () => {
     const parsed = JSON.parse(toJson(barge().result)) as Record<string, unknown>;
-    expect(Object.keys(parsed)).toEqual(['hull', 'density', 'caution', 'rows']);
+    expect(Object.keys(parsed)).toEqual(['hull', 'density', 'caution', 'rows', 'notes']);
     expect(parsed['caution']).toBe(CAUTION);
     expect(parsed['density']).toBe(DENSITY);
     const rows = parsed['rows'] as Record<string, unknown>[];

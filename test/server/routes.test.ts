@@ -77,7 +77,7 @@ describe('POST /v1/hydrostatics', () => {
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
     const body = JSON.parse(res.body);
-    expect(Object.keys(body)).toEqual(['hull', 'density', 'caution', 'rows']);
+    expect(Object.keys(body)).toEqual(['hull', 'density', 'caution', 'rows', 'notes']);
     expect(body.hull).toEqual(boxHull);
     expect(body.density).toBe(1.025);
     expect(body.caution).toBe(CAUTION);
