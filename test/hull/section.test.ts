@@ -170,6 +170,52 @@ describe('corners, flats and closures', () => {
     }
   });
 
+  test('a flat of bottom drawn as three or more points, unevenly spaced, is fitted along its chord length', () => {
+    // The run's heights do not rise (0, 0, 0 ...), so the section is fitted with the chord
+    // length as parameter (y(t), z(t)); for points on straight lines that fit is the lines
+    // themselves. A box section of half-breadth 1: area 2d, momentZ d^2, girth 2(1 + d),
+    // whether the bilge is marked a knuckle or the side continues the same run.
+    for (const knuckle of [true, false]) {
+      const s = new Section([
+        { y: 0, z: 0 },
+        { y: 0.3, z: 0 },
+        { y: 1, z: 0, knuckle },
+        { y: 1, z: 0.2 },
+        { y: 1, z: 0.9 },
+        { y: 1, z: 1.2 },
+        { y: 1, z: 2 },
+      ]);
+      for (const d of [0.1, 0.2, 0.55, 0.9, 1.7]) {
+        const v = s.evaluate(d);
+        const what = `${knuckle ? 'with' : 'without'} knuckle, draft ${d}`;
+        expect(v.area, what).toBeRelClose(2 * d, ROUNDING);
+        expect(v.momentZ, what).toBeRelClose(d * d, ROUNDING);
+        expect(v.girth, what).toBeRelClose(2 * (1 + d), ROUNDING);
+        expect(v.halfBreadth, what).toBeRelClose(1, ROUNDING);
+      }
+      expect(s.yBottom).toBe(1);
+    }
+  });
+
+  test('a flat of bottom running on into a round bilge in one run, unevenly spaced, follows the circle', () => {
+    // Flat of half-width 1 on the baseline, then a quarter circle of radius 1 centred at
+    // (y, z) = (1, 1), with no knuckle between: one run whose heights do not rise at first,
+    // fitted along its chord length. Closed forms (any table of integrals): with
+    // c = (R - d)/R, the area beside the circle up to d is (R^2/2)(pi/2 - asin c - c sqrt(1 - c^2))
+    // and its arc R acos c. Points are placed at uneven angles on purpose: the chord length
+    // follows them, where an even parameter would bend the fitted curve (1.5 % off).
+    const angles = [0.1, 0.5, 0.7, 1.2, Math.PI / 2];
+    const s = new Section([{ y: 0, z: 0 }, { y: 0.4, z: 0 }, { y: 1, z: 0 }, ...angles.map((t) => ({ y: 1 + Math.sin(t), z: 1 - Math.cos(t) }))]);
+    for (const d of [0.3, 0.6, 1]) {
+      const c = 1 - d;
+      const area = d + 0.5 * (Math.PI / 2 - Math.asin(c) - c * Math.sqrt(1 - c * c));
+      // Measured 4e-4 of the area and 3e-4 of the girth at worst (the parabolas' own error
+      // on a circle at these spacings); the bound is about twice that.
+      expect(s.evaluate(d).area / 2).toBeRelClose(area, 1e-3);
+      expect(s.evaluate(d).girth / 2).toBeRelClose(1 + Math.acos(c), 1e-3);
+    }
+  });
+
   test('the flat of bottom closes to the centreline when the lowest half-breadth is above zero', () => {
     // Grid-form box: the lowest point is (1, 0), so the bottom runs flat from there to
     // the centreline: it adds to the girth and bounds the area, as for the box above.

@@ -21,6 +21,7 @@ import { describe, expect, test } from 'vitest';
 import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/common/constants.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from '../../core/upright/hydrostaticFields.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
+import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { integrate } from '../fixtures/gaussLegendre.js';
 import { boxBarge, circularCylinder, linspace, parabolicHull, planWedge, vPrism } from '../fixtures/hulls.js';
@@ -252,6 +253,28 @@ describe('wedge in plan', () => {
   });
 });
 
+describe('box with a sloping keel', () => {
+  // A box L x B whose keel rises as z = a x: at a draft above the highest keel the bottom
+  // is a plane sloping at a, its area L B sqrt(1 + a^2); the sides are trapezia of area
+  // d L - a L^2 / 2 each; the end faces are rectangles B d (x = 0) and B (d - a L) (x = L).
+  const L = 12;
+  const B = 3;
+  const a = 0.05;
+  const hull: HullModel = {
+    name: 'box with a sloping keel',
+    stations: linspace(0, L, 13).map((x) => ({ x, points: [{ y: B / 2, z: a * x, knuckle: false }, { y: B / 2, z: 2, knuckle: false }] })),
+  };
+  test('its wetted surface counts the bottom along its slope: L B sqrt(1 + a^2), with the sides and the end faces', () => {
+    for (const d of [0.7, 1.1, 1.9]) {
+      const [row] = hydrostaticTable(prepareHull(hull), [d]);
+      const wetted = L * B * Math.sqrt(1 + a * a) + 2 * (d * L - (a * L * L) / 2) + B * d + B * (d - a * L);
+      expect(row!.wettedSurface).toBeRelClose(wetted, 1e-12);
+      // And the volume: B times the side's trapezium.
+      expect(row!.volume).toBeRelClose(B * (d * L - (a * L * L) / 2), 1e-12);
+    }
+  });
+});
+
 describe('horizontal circular cylinder', () => {
   // Radius R, axis at z = R. The immersed section at draft d is a circular segment:
   //   A(d) = R^2 acos((R - d)/R) - (R - d) h,  h = sqrt(2 R d - d^2) the half chord;
@@ -450,6 +473,22 @@ describe('parabolic hull', () => {
       }
       const row = tableAt(hull, [d], SEA_WATER_DENSITY)[0]!;
       expect(row.iT).toBeRelClose((2 / 3) * (s / 3) * sum, EXACT);
+    }
+  });
+});
+
+describe('the midship area between stations', () => {
+  test('with an even number of stations none stands at amidships, and the parabola through three gives the parabolic hull\'s Am exactly', () => {
+    // The parabolic hull's sectional area is B (1 - xi^2)(d^2/T - d^3/(3T^2)) (the parabolic
+    // hull above): a quadratic in x, which the parabola through any three stations reproduces.
+    const L = 30;
+    const B = 8;
+    const T = 2;
+    const hull = parabolicHull(L, B, T, 3, 20, 13); // 20 stations: amidships x = 15 m lies between two
+    expect(hull.stations.some((s) => Math.abs(s.x - L / 2) < 1e-9)).toBe(false);
+    for (const d of [0.5, 1.25, 2]) {
+      const [row] = hydrostaticTable(prepareHull(hull), [d]);
+      expect(row!.am).toBeRelClose(B * ((d * d) / T - d ** 3 / (3 * T * T)), 1e-12);
     }
   });
 });

@@ -290,3 +290,58 @@ describe('boxes and densities', () => {
     );
   });
 });
+
+describe('form coefficients', () => {
+  /**
+   * A hull whose sections widen upward from the keel and whose fullest section stands at
+   * amidships: half-breadth (B/2)(1 - a xi^2)(s + (1 - s) eta^p) at a height eta of the
+   * depth above a keel k = K xi^2 (rocker, lowest amidships), p <= 1 so the sections
+   * widen upward; stations mirrored about a station at amidships, at random spacing.
+   * Each coefficient is a ratio of the hull to a figure that encloses such a hull (the
+   * block, the midship rectangle, the prism on the midship section, the waterplane's
+   * rectangle), so it lies in (0, 1] (definitions as in E. C. Tupper, Introduction to
+   * Naval Architecture, 5th ed., ch. 2; from memory).
+   */
+  const widening = fc
+    .record({
+      gaps: fc.array(finite(0.2, 4), { minLength: 1, maxLength: 10 }),
+      B: finite(0.5, 20),
+      D: finite(0.5, 6),
+      a: finite(0, 0.95),
+      s: finite(0, 1),
+      p: finite(0.3, 1),
+      K: finite(0, 0.5),
+      points: fc.integer({ min: 2, max: 9 }),
+    })
+    .map((r): HullModel => {
+      const half = cumulative(0, r.gaps);
+      const xs = [...half.slice(1).map((h) => -h).reverse(), ...half];
+      const L = 2 * half[half.length - 1]!;
+      const stations = xs.map((x) => {
+        const xi = (2 * x) / L;
+        const keel = r.K * r.D * xi * xi;
+        const depth = r.D * (1 + r.K) - keel;
+        const points = Array.from({ length: r.points }, (_, j) => {
+          const eta = j / (r.points - 1);
+          return { y: (r.B / 2) * (1 - r.a * xi * xi) * (r.s + (1 - r.s) * eta ** r.p), z: keel + depth * eta, knuckle: false };
+        });
+        return { x, points };
+      });
+      return { name: 'widening hull', stations };
+    });
+
+  test('on random hulls whose sections widen upward, Cb, Cm, Cp and Cwp lie in (0, 1]', () => {
+    fc.assert(
+      fc.property(widening, fractions, (hull, f) => {
+        const p = prepareHull(hull);
+        const drafts = f.map((v) => p.lowestKeel + (p.lowestDeck - p.lowestKeel) * (0.02 + 0.98 * v));
+        for (const row of hydrostaticTable(p, drafts)) {
+          for (const k of ['cb', 'cm', 'cp', 'cwp'] as const) {
+            expect(row[k], `${k} at ${row.draft}`).toBeGreaterThan(0);
+            expect(row[k], `${k} at ${row.draft}`).toBeLessThanOrEqual(1);
+          }
+        }
+      }),
+    );
+  });
+});
