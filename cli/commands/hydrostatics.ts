@@ -74,8 +74,10 @@ Options:
   --error-estimate    add to each row an estimate of the integration error of
                       volume, LCB, VCB, waterplane area and BMt (exact minus
                       computed), by halving the stations and waterlines and
-                      Richardson's rule for Simpson's h^4; it assumes a smooth
-                      hull and is marked when a count does not halve cleanly
+                      Richardson's rule for Simpson's h^4; an estimate is not
+                      given (-) where a third halving does not confirm the h^4
+                      law or the halving loses a feature of the hull, and the
+                      reason is printed above the table
   -h, --help          this help
 
 Forms:

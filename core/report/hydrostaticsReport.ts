@@ -8,7 +8,7 @@
 import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
 import { csvSafeText } from '../common/csvSafe.js';
-import { ERROR_ESTIMATE_FIELDS, type ErrorEstimate, type Halving } from '../upright/errorEstimate.js';
+import { ERROR_ESTIMATE_FIELDS, type ErrorEstimates, type Halving } from '../upright/errorEstimate.js';
 import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from '../upright/hydrostaticFields.js';
 import type { HullModel } from '../hull/hullModel.js';
@@ -38,11 +38,13 @@ export interface HydrostaticsReport {
   readonly rows: readonly ReportRow[];
   /** How the coarse hull of the error estimate was made, when asked for. */
   readonly halving?: Halving;
+  /** Why estimates are not given, each reason once with its drafts, when asked for (core/upright/errorEstimate.ts). */
+  readonly errorNotes?: readonly string[];
 }
 
 export interface ReportOptions {
   readonly units: UnitSystem;
-  readonly errorEstimate?: { readonly estimates: readonly ErrorEstimate[]; readonly halving: Halving };
+  readonly errorEstimate?: Pick<ErrorEstimates, 'estimates' | 'unreliable' | 'halving'>;
 }
 
 const SI_FIELDS: readonly (ReportField & { from: keyof HydrostaticRow; factor: number })[] = HYDROSTATIC_FIELDS.map((f) => ({
@@ -56,6 +58,19 @@ const SI_FIELDS: readonly (ReportField & { from: keyof HydrostaticRow; factor: n
 /** The unit of an estimated quantity in the chosen system, and its factor from SI. */
 function estimateUnit(siUnit: string, units: UnitSystem): { unit: string; factor: number } {
   return units === 'si' ? { unit: siUnit, factor: 1 } : IMPERIAL_UNITS[siUnit]!;
+}
+
+/** Each reason once, with the drafts it holds at: "drafts 1, 1.2 m: <reason>". */
+function groupedNotes(drafts: readonly number[], reasons: readonly (readonly string[])[]): string[] {
+  const byReason = new Map<string, number[]>();
+  drafts.forEach((d, i) => {
+    for (const r of reasons[i] ?? []) {
+      const list = byReason.get(r) ?? [];
+      list.push(d);
+      byReason.set(r, list);
+    }
+  });
+  return [...byReason].map(([r, ds]) => `draft${ds.length > 1 ? 's' : ''} ${ds.map((d) => Number(d.toPrecision(6))).join(', ')} m: ${r}`);
 }
 
 export function hydrostaticsReport(hull: HullModel, density: number, rows: readonly HydrostaticRow[], options: ReportOptions): HydrostaticsReport {
@@ -79,7 +94,9 @@ export function hydrostaticsReport(hull: HullModel, density: number, rows: reado
     caution: CAUTION,
     fields: fields.map((f) => ({ key: f.key, unit: f.unit, label: f.label })),
     rows: out,
-    ...(est === undefined ? {} : { halving: est.halving }),
+    ...(est === undefined
+      ? {}
+      : { halving: est.halving, errorNotes: groupedNotes(rows.map((r) => r.draft), est.unreliable) }),
   };
 }
 
@@ -108,8 +125,9 @@ function preambleLines(r: HydrostaticsReport): string[] {
       : `density: ${r.density} t/m3 (${Number(cubicFeetPerLongTon(r.density).toPrecision(6))} ft3 per long ton); units: feet and long tons (1 ft = 0.3048 m; 1 long ton = 1016.0469088 kg)`,
   ];
   if (r.halving !== undefined) {
-    lines.push('error estimates: exact minus computed by halving (every second station and waterline) and Richardson extrapolation for Simpson\'s h^4; assumes a smooth hull');
+    lines.push('error estimates: exact minus computed by halving (every second station and waterline) and Richardson extrapolation for Simpson\'s h^4; given only where a third level confirms the h^4 law and the halving keeps the hull\'s features');
     for (const n of r.halving.notes) lines.push(`error estimate: ${n}`);
+    for (const n of r.errorNotes ?? []) lines.push(`error estimate not given at ${n}`);
   }
   return lines;
 }

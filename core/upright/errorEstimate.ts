@@ -37,11 +37,31 @@
  * - Drafts on a waterline kept in the coarse hull (every second tabulated one) give the
  *   cleanest estimate; between them both hulls integrate a cut panel along its fitted
  *   curve and the h^4 law holds only roughly.
+ *
+ * Where these assumptions fail the estimate can be ten times too small, or of the wrong
+ * sign, which is worse than none. So an estimate is given only where it can be trusted,
+ * and otherwise is marked unreliable with the reason, instead of a number:
+ * - the halving moves where the waterline ends (a raked stem, a cut-up stern or a fin's
+ *   foot lies between stations, and the keel line through every second station crosses
+ *   the waterline elsewhere), or changes the number of its immersed runs;
+ * - the keel line turns sharply at a station the halving drops (a fin or skeg spanning
+ *   fewer than four stations, a forefoot's knuckle): the coarse hull does not have the
+ *   feature the fine hull has;
+ * - the waterline crosses a knuckle line between stations (its crossing moves with the
+ *   stations);
+ * - a third level (every fourth station and waterline) shows the h^4 law does not hold:
+ *   the ratio of the coarser difference to the finer one, about 16 under the law, lies
+ *   outside 6 to 46 for that quantity (H4_RATIO_BAND, where the estimate would be off by
+ *   more than a factor of three), or no third level can be made to check it (fewer than
+ *   nine stations).
+ * The bounds and the keel test (a turn of more than 2 % of the hull's depth from the
+ * straight line between the neighbours) are common practice, no source.
  */
 import { SEA_WATER_DENSITY } from '../common/constants.js';
 import type { HullModel, Point, Station } from '../hull/hullModel.js';
 import { perpendiculars } from '../hull/hullModel.js';
 import { hydrostaticsAt, hydrostaticTable } from './hydrostatics.js';
+import { waterlinePlan } from './waterlinePlan.js';
 import { prepareHull, type PreparedHull } from '../hull/preparedHull.js';
 
 /** The quantities whose integration error is estimated, with their units. */
@@ -128,22 +148,133 @@ export function coarseHull(hull: HullModel): { hull: HullModel; halving: Halving
 const NO_ESTIMATE: ErrorEstimate = { volume: Number.NaN, lcb: Number.NaN, vcb: Number.NaN, waterplaneArea: Number.NaN, bmt: Number.NaN };
 
 /**
+ * The h^4 law's ratio between successive differences is 16. If the error falls by a factor
+ * r per halving, (fine - coarse)/15 is (r - 1)/15 times the error: within a factor of three
+ * of it for r from 6 to 46. The third level's ratio stands in for r; outside this band the
+ * estimate is not given.
+ */
+export const H4_RATIO_BAND = { min: 6, max: 46 } as const;
+
+/** A keel turning by more than this share of the hull's depth at a dropped station is a feature the coarse hull lacks. */
+const KEEL_TURN = 0.02;
+
+/** The error estimates at each draft, with the reasons an estimate is not given. */
+export interface ErrorEstimates {
+  /** Estimated exact minus computed, per draft; NaN where no estimate is given. */
+  readonly estimates: ErrorEstimate[];
+  /** Per draft, why some or all of its estimates are not given (empty when all are). */
+  readonly unreliable: string[][];
+  readonly halving: Halving;
+}
+
+const fmt = (v: number): string => String(Number(v.toPrecision(6)));
+
+/** Indices of the fine hull's stations that the halving keeps (everySecond of the count). */
+function keptStations(n: number): Set<number> {
+  return new Set(everySecond(n));
+}
+
+/** Reasons that the coarse hull cannot stand for the fine one at `draft`, in words. */
+function structuralReasons(fine: PreparedHull, coarse: PreparedHull, draft: number): string[] {
+  const reasons: string[] = [];
+  const a = waterlinePlan(fine, draft);
+  const b = waterlinePlan(coarse, draft);
+  const tol = 1e-6 * Math.max(1, Math.abs(fine.perp.lbp));
+  if (a.runs.length !== b.runs.length) {
+    reasons.push(`the waterline has ${a.runs.length} immersed stretch(es) with every station but ${b.runs.length} with every second`);
+  } else {
+    a.ends.forEach((e, k) => {
+      const f = b.ends[k]!;
+      if (Math.abs(e.x - f.x) > tol) reasons.push(`the halving moves where the waterline ends ${e.side} (x = ${fmt(e.x)} m with every station, ${fmt(f.x)} m with every second)`);
+    });
+  }
+  // The keel line at the stations the halving drops.
+  const n = fine.x.length;
+  const kept = keptStations(n);
+  let zTop = -Infinity;
+  for (const s of fine.sections) zTop = Math.max(zTop, s.zDeck);
+  const depth = zTop - fine.lowestKeel;
+  for (let i = 1; i < n - 1; i++) {
+    if (kept.has(i) || !(fine.keel[i]! < draft)) continue;
+    const t = (fine.x[i]! - fine.x[i - 1]!) / (fine.x[i + 1]! - fine.x[i - 1]!);
+    const line = (1 - t) * fine.keel[i - 1]! + t * fine.keel[i + 1]!;
+    if (Math.abs(fine.keel[i]! - line) > KEEL_TURN * depth) {
+      reasons.push(`the keel line turns at x = ${fmt(fine.x[i]!)} m (a fin, skeg or knuckle), a station the halving drops`);
+    }
+  }
+  // Knuckle lines the waterline crosses between stations: corners matched by their order.
+  const counts = new Map<number, number>();
+  for (const s of fine.sections) counts.set(s.cornerIndices().length, (counts.get(s.cornerIndices().length) ?? 0) + 1);
+  const common = [...counts.entries()].sort((p, q) => q[1] - p[1])[0]?.[0] ?? 0;
+  for (let j = 1; j < common - 1; j++) {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const s of fine.sections) {
+      const c = s.cornerIndices();
+      if (c.length !== common) continue;
+      const z = s.pointsZ()[c[j]!]!;
+      lo = Math.min(lo, z);
+      hi = Math.max(hi, z);
+    }
+    if (lo < draft && draft < hi) reasons.push(`the waterline crosses a knuckle line (from z = ${fmt(lo)} to ${fmt(hi)} m) between stations, where the halving moves the crossing`);
+  }
+  return reasons;
+}
+
+/**
  * The error estimate at each draft (m): `fine` is the prepared hull, drafts as for
  * hydrostaticTable (checked on the fine hull; the coarse hull has the same keel and deck
- * heights, since corners are kept). Density does not enter the estimated quantities.
+ * heights at the stations it keeps). Density does not enter the estimated quantities.
  */
-export function errorEstimates(fine: PreparedHull, drafts: readonly number[], density = SEA_WATER_DENSITY): { estimates: ErrorEstimate[]; halving: Halving } {
+export function errorEstimates(fine: PreparedHull, drafts: readonly number[], density = SEA_WATER_DENSITY): ErrorEstimates {
   const rows = hydrostaticTable(fine, drafts, density);
   const { hull, halving } = coarseHull(fine.hull);
-  if (!halving.possible) return { estimates: rows.map(() => ({ ...NO_ESTIMATE })), halving };
+  if (!halving.possible) {
+    return { estimates: rows.map(() => ({ ...NO_ESTIMATE })), unreliable: rows.map(() => [...halving.notes]), halving };
+  }
   const coarse = prepareHull(hull);
-  const estimates = rows.map((f) => {
+  const third = coarseHull(hull);
+  const coarser = third.halving.possible ? prepareHull(third.hull) : undefined;
+  const inRange = (p: PreparedHull, d: number): boolean => d > p.lowestKeel && d <= p.lowestDeck;
+  const estimates: ErrorEstimate[] = [];
+  const unreliable: string[][] = [];
+  for (const f of rows) {
+    const d = f.draft;
+    const notes: string[] = [];
     // A draft that only the dropped stations reach (a keel lower than any kept one) has no coarse value.
-    if (!(f.draft > coarse.lowestKeel) || f.draft > coarse.lowestDeck) return { ...NO_ESTIMATE };
-    const c = hydrostaticsAt(coarse, f.draft, density);
+    if (!inRange(coarse, d)) {
+      estimates.push({ ...NO_ESTIMATE });
+      unreliable.push([`only stations the halving drops reach draft ${fmt(d)} m`]);
+      continue;
+    }
+    const c = hydrostaticsAt(coarse, d, density);
+    const structural = structuralReasons(fine, coarse, d);
+    const cc = coarser !== undefined && inRange(coarser, d) ? hydrostaticsAt(coarser, d, density) : undefined;
     const e = {} as ErrorEstimate;
-    for (const { key } of ERROR_ESTIMATE_FIELDS) e[key] = (f[key] - c[key]) / 15;
-    return e;
-  });
-  return { estimates, halving };
+    for (const { key } of ERROR_ESTIMATE_FIELDS) {
+      const d1 = f[key] - c[key];
+      e[key] = d1 / 15;
+      if (structural.length > 0) continue;
+      // Differences at rounding level: the rule is exact for this quantity here.
+      const scale = Math.max(Math.abs(f[key]), key === 'lcb' ? Math.abs(fine.perp.lbp) : 0);
+      if (Math.abs(d1) <= 1e-11 * scale) continue;
+      if (cc === undefined) {
+        notes.push(`${key}: no third level (every fourth station) can be made to check that the error falls as h^4`);
+        e[key] = Number.NaN;
+        continue;
+      }
+      const ratio = (c[key] - cc[key]) / d1;
+      if (!(ratio >= H4_RATIO_BAND.min && ratio <= H4_RATIO_BAND.max)) {
+        notes.push(`${key}: halving twice gives a ratio of ${fmt(ratio)} between the differences, not about 16: the error does not fall as h^4 here`);
+        e[key] = Number.NaN;
+      }
+    }
+    if (structural.length > 0) {
+      for (const { key } of ERROR_ESTIMATE_FIELDS) e[key] = Number.NaN;
+      notes.push(...structural);
+    }
+    estimates.push(e);
+    unreliable.push(notes);
+  }
+  return { estimates, unreliable, halving };
 }

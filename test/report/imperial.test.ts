@@ -21,7 +21,7 @@ import { hydrostaticsReport, reportCsv, reportText } from '../../core/report/hyd
 import { cubicFeetPerLongTon, IMPERIAL_FACTORS, imperialRow } from '../../core/report/imperial.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
-import { linspace } from '../fixtures/hulls.js';
+import { gridHull, linspace } from '../fixtures/hulls.js';
 import '../helpers/relClose.js';
 
 const FOOT = 0.3048; // m, exact (1959)
@@ -150,9 +150,18 @@ describe('the report in imperial units', () => {
   });
 
   test('error estimates are converted with their quantity and shown beside it', () => {
-    const est = errorEstimates(p, drafts, 1.025);
-    const si = hydrostaticsReport(hull, 1.025, rows, { units: 'si', errorEstimate: est });
-    const imp = hydrostaticsReport(hull, 1.025, rows, { units: 'imperial', errorEstimate: est });
+    // A smooth hull, fine enough that every estimate is given (a sine hull: half-breadth
+    // (1 + 0.3 xi) cos(pi xi / 2) sin(pi z / 6) x 3 m, 25 stations, 17 waterlines).
+    const smooth = gridHull('sine hull', linspace(0, 24, 25), linspace(0, 3, 17), (x, z) => {
+      const xi = x / 12 - 1;
+      return 3 * (1 + 0.3 * xi) * Math.cos((Math.PI * xi) / 2) * Math.sin((Math.PI * z) / 6);
+    });
+    const sp = prepareHull(smooth);
+    const smoothRows = hydrostaticTable(sp, [1.5]);
+    const est = errorEstimates(sp, [1.5], 1.025);
+    expect(est.unreliable[0]).toEqual([]);
+    const si = hydrostaticsReport(smooth, 1.025, smoothRows, { units: 'si', errorEstimate: est });
+    const imp = hydrostaticsReport(smooth, 1.025, smoothRows, { units: 'imperial', errorEstimate: est });
     const siE = si.rows[0]!['errorEstimate'] as Record<string, number>;
     const impE = imp.rows[0]!['errorEstimate'] as Record<string, number>;
     expect(siE['volume']).toBe(est.estimates[0]!.volume);
@@ -165,5 +174,15 @@ describe('the report in imperial units', () => {
     const csv = reportCsv(si);
     expect(csv).toContain('volumeError_m3');
     expect(csv).toContain('# error estimates: exact minus computed');
+  });
+
+  test('an estimate that cannot be trusted is not given, and the report says why', () => {
+    // The launch's 11 stations leave a third level of 3 stations and 2 waterlines, which
+    // cannot confirm the h^4 law for its volume at the lightest draft.
+    const est = errorEstimates(p, drafts, 1.025);
+    const si = hydrostaticsReport(hull, 1.025, rows, { units: 'si', errorEstimate: est });
+    expect((si.rows[0]!['errorEstimate'] as Record<string, number>)['volume']).toBeNaN();
+    expect(si.errorNotes![0]).toMatch(/^draft 0\.4572 m: volume: halving twice gives a ratio of .* not about 16/);
+    expect(reportCsv(si)).toContain('# error estimate not given at draft 0.4572 m: volume: halving twice');
   });
 });

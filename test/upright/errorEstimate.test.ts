@@ -17,8 +17,13 @@
  * - Quartic waterplane y = (B/2)(1 - xi^4), wall-sided: volume 0.8 L B T (the integral of
  *   1 - xi^4 is 8/5), Aw 0.8 L B; its Simpson error is exactly C h^4, so Richardson is
  *   exact for the volume.
+ * - Raked-bow barge and fin yacht: polyhedra worked in the tests below.
+ * - Dense references of the accuracy hulls: test/fixtures/accuracyHulls.ts integrated by
+ *   test/fixtures/gaussLegendre.ts, as in hydrostatics.accuracy.test.ts.
  * The criterion, from the requirement on the estimate: wherever the true error exceeds
- * 1e-6 of the value, estimate / true error lies between 1/3 and 3.
+ * 1e-6 of the value, the estimate either lies within a factor of three of it (estimate /
+ * true error between 1/3 and 3) or is not given, with the reason; an estimate of the
+ * wrong sign or ten times too small is never given.
  */
 import { describe, expect, test } from 'vitest';
 import { coarseHull, errorEstimates, ERROR_ESTIMATE_FIELDS, type ErrorEstimateField } from '../../core/upright/errorEstimate.js';
@@ -26,6 +31,8 @@ import { GL5_T, GL5_W } from '../../core/quadrature/gauss.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
+import { CHINE, chineCrossing, chineHull, chineSection, SMOOTH, smoothHalfBreadth, smoothHull } from '../fixtures/accuracyHulls.js';
+import { integrate } from '../fixtures/gaussLegendre.js';
 import { gridHull, linspace, parabolicHull } from '../fixtures/hulls.js';
 import '../helpers/relClose.js';
 
@@ -40,21 +47,45 @@ function dense(f: (t: number) => number, a: number, b: number): number {
 
 type Exact = Record<ErrorEstimateField, number>;
 
-/** Check estimate / true error in [1/3, 3] wherever the true error is above 1e-6 of the value; returns how many were checked. */
-function expectBracketed(hull: HullModel, draft: number, exact: Exact): number {
+interface Outcome {
+  /** Quantities whose true error is above 1e-6 of the value. */
+  checked: number;
+  /** Of those, the ones given an estimate (all within a factor of three). */
+  given: number;
+}
+
+/**
+ * Every estimate at `draft` either lies within a factor of three of the true error or is
+ * not given (NaN, with a reason); where the true error is below 1e-6 of the value a
+ * given estimate must be as small. Returns how many were checked and how many given.
+ */
+function expectHonest(hull: HullModel, draft: number, exact: Exact): Outcome {
   const p = prepareHull(hull);
   const fine = hydrostaticsAt(p, draft);
-  const [est] = errorEstimates(p, [draft]).estimates;
-  let checked = 0;
+  const result = errorEstimates(p, [draft]);
+  const est = result.estimates[0]!;
+  const reasons = result.unreliable[0]!;
+  const out = { checked: 0, given: 0 };
   for (const { key } of ERROR_ESTIMATE_FIELDS) {
     const truth = exact[key] - fine[key];
-    if (Math.abs(truth) <= 1e-6 * Math.abs(exact[key])) continue;
-    const ratio = est![key] / truth;
-    expect(ratio, `${hull.name} at ${draft} m, ${key}: estimate ${est![key]} against true error ${truth}`).toBeGreaterThanOrEqual(1 / 3);
-    expect(ratio, `${hull.name} at ${draft} m, ${key}: estimate ${est![key]} against true error ${truth}`).toBeLessThanOrEqual(3);
-    checked++;
+    const what = `${hull.name} at ${draft} m, ${key}: estimate ${est[key]} against true error ${truth}`;
+    if (Number.isNaN(est[key])) {
+      // Not given: a reason names the quantity or the whole draft.
+      expect(reasons.length, what).toBeGreaterThan(0);
+      if (Math.abs(truth) > 1e-6 * Math.abs(exact[key])) out.checked++;
+      continue;
+    }
+    if (Math.abs(truth) <= 1e-6 * Math.abs(exact[key])) {
+      expect(Math.abs(est[key]), what).toBeLessThanOrEqual(1e-5 * Math.abs(exact[key]));
+      continue;
+    }
+    out.checked++;
+    out.given++;
+    const ratio = est[key] / truth;
+    expect(ratio, what).toBeGreaterThanOrEqual(1 / 3);
+    expect(ratio, what).toBeLessThanOrEqual(3);
   }
-  return checked;
+  return out;
 }
 
 describe('the error estimate brackets the true error', () => {
@@ -83,21 +114,24 @@ describe('the error estimate brackets the true error', () => {
     expect(dense((xi) => Math.cos((Math.PI * xi) / 2) ** 3, -1, 1)).toBeRelClose(8 / (3 * Math.PI), 1e-14);
   });
 
-  test('on a sine hull with 13 stations and 9 waterlines, for every estimated quantity', () => {
-    // 12 and 8 intervals: the coarse hull is Simpson's first rule throughout.
+  test('on a sine hull with 13 stations and 9 waterlines: each estimate within a factor of three, or not given', () => {
+    // 12 and 8 intervals: the coarse hull is Simpson's first rule throughout. The third
+    // level (4 stations, 3 waterlines) is too coarse to confirm the h^4 law for most
+    // quantities, so most are not given here.
     const hull = sineHull(13, 9);
     expect(coarseHull(hull).halving.clean).toBe(true);
     let checked = 0;
-    for (const T of [D / 2, (3 * D) / 4, D]) checked += expectBracketed(hull, T, sineExact(T));
-    // All five quantities have a true error above 1e-6 at every draft: the test is not empty.
-    expect(checked).toBe(15);
+    for (const T of [D / 2, (3 * D) / 4, D]) checked += expectHonest(hull, T, sineExact(T)).checked;
+    expect(checked).toBe(15); // every quantity has a true error above 1e-6: the test is not empty
   });
 
-  test('on a finer sine hull too, where the errors are sixteen times smaller', () => {
+  test('on a finer sine hull every estimate is given, within a factor of three', () => {
     const hull = sineHull(25, 17);
-    let checked = 0;
-    for (const T of [D / 2, D]) checked += expectBracketed(hull, T, sineExact(T));
-    expect(checked).toBeGreaterThanOrEqual(8);
+    for (const T of [D / 2, D]) {
+      const o = expectHonest(hull, T, sineExact(T));
+      expect(o.given, `at ${T} m`).toBe(o.checked);
+      expect(o.checked).toBeGreaterThanOrEqual(4);
+    }
   });
 
   test("on the parabolic hull's iT and BMt (its volume is exact)", () => {
@@ -108,7 +142,7 @@ describe('the error estimate brackets the true error', () => {
     const volume = (4 / 9) * Lp * Bp * T;
     const iT = (2 / 3) * (Bp / 2) ** 3 * (Lp / 2) * (32 / 35);
     const exact: Exact = { volume, lcb: Lp / 2, vcb: (5 * T) / 8, waterplaneArea: (2 / 3) * Lp * Bp, bmt: iT / volume };
-    expect(expectBracketed(hull, T, exact)).toBe(1); // bmt only: the rest is integrated exactly
+    expect(expectHonest(hull, T, exact).checked).toBe(1); // bmt only: the rest is integrated exactly
     // And where the true error is nil, so is the estimate (to rounding).
     const [est] = errorEstimates(prepareHull(hull), [T]).estimates;
     expect(Math.abs(est!.volume)).toBeLessThan(1e-12 * volume);
@@ -127,10 +161,90 @@ describe('the error estimate brackets the true error', () => {
     const volume = 0.8 * Lq * Bq * T;
     const iT = (2 / 3) * (Bq / 2) ** 3 * (Lq / 2) * W3;
     const exact: Exact = { volume, lcb: Lq / 2, vcb: T / 2, waterplaneArea: 0.8 * Lq * Bq, bmt: iT / volume };
-    expect(expectBracketed(hull, T, exact)).toBe(3);
+    const o = expectHonest(hull, T, exact);
+    expect(o.checked).toBe(3);
     const p = prepareHull(hull);
     const [est] = errorEstimates(p, [T]).estimates;
     expect(est!.volume).toBeRelClose(volume - hydrostaticsAt(p, T).volume, 1e-9);
+  });
+});
+
+describe('on every test hull with an exact answer the estimate is honest', () => {
+  test('the accuracy hulls (dense references): smooth round bilge and hard chine, coarse and fine', () => {
+    const smoothExact = (d: number): Exact => {
+      const area = (x: number): number => integrate((z) => 2 * smoothHalfBreadth(x, z), 0, d, 40);
+      const volume = integrate(area, 0, SMOOTH.L, 40);
+      const iT = (2 / 3) * integrate((x) => smoothHalfBreadth(x, d) ** 3, 0, SMOOTH.L, 40);
+      return {
+        volume,
+        lcb: integrate((x) => x * area(x), 0, SMOOTH.L, 40) / volume,
+        vcb: integrate((x) => integrate((z) => 2 * z * smoothHalfBreadth(x, z), 0, d, 40), 0, SMOOTH.L, 40) / volume,
+        waterplaneArea: integrate((x) => 2 * smoothHalfBreadth(x, d), 0, SMOOTH.L, 40),
+        bmt: iT / volume,
+      };
+    };
+    const chineExact = (d: number): Exact => {
+      const c = chineCrossing(d);
+      const cuts = c === undefined ? [0, CHINE.L] : [0, c, CHINE.L];
+      const along = (f: (x: number) => number): number => {
+        let sum = 0;
+        for (let k = 0; k + 1 < cuts.length; k++) sum += integrate(f, cuts[k]!, cuts[k + 1]!, 40);
+        return sum;
+      };
+      const volume = along((x) => chineSection(x, d).area);
+      return {
+        volume,
+        lcb: along((x) => x * chineSection(x, d).area) / volume,
+        vcb: along((x) => chineSection(x, d).momentZ) / volume,
+        waterplaneArea: along((x) => 2 * chineSection(x, d).halfBreadth),
+        bmt: ((2 / 3) * along((x) => chineSection(x, d).halfBreadth ** 3)) / volume,
+      };
+    };
+    let given = 0;
+    for (const [hull, drafts] of [[smoothHull(21, 13), [0.8, 1.1, 1.6, 2.3]], [smoothHull(41, 25), [0.8, 1.6]]] as const) {
+      for (const d of drafts) given += expectHonest(hull, d, smoothExact(d)).given;
+    }
+    for (const [hull, drafts] of [[chineHull(21), [0.3, 0.6, 1.0, 1.5]], [chineHull(41), [0.3, 0.6, 1.0, 1.5]]] as const) {
+      for (const d of drafts) given += expectHonest(hull, d, chineExact(d)).given;
+    }
+    // Not a test of silence: many of these estimates are given (measured 31 of the 68 whose
+    // true error is above 1e-6; the coarse smooth hull's third level is too coarse for most).
+    expect(given).toBeGreaterThanOrEqual(25);
+  });
+
+  test('the raked-bow barge: the halving moves where the waterline ends, so no estimate (the old one had the wrong sign)', () => {
+    // The barge of test/upright/waterlinePlan.test.ts: box 27 x 9 with a 45-degree rake to x = 29 m.
+    const xs = [0, 3, 6, 9, 12, 15, 18, 21, 24, 27, 28, 29];
+    const hull: HullModel = {
+      name: 'raked-bow barge',
+      stations: xs.map((x) => ({ x, points: [{ y: 4.5, z: Math.max(0, x - 27), knuckle: false }, { y: 4.5, z: 3, knuckle: false }] })),
+    };
+    const d = 0.5;
+    const exactVolume = 27 * 9 * d + (9 * d * d) / 2; // box plus wedge
+    const r = errorEstimates(prepareHull(hull), [d]);
+    expect(Number.isNaN(r.estimates[0]!.volume)).toBe(true);
+    expect(r.unreliable[0]!.join(' ')).toMatch(/moves where the waterline ends fwd \(x = 27\.5 m with every station, 26 m with every second\)/);
+    // The computed volume itself is exact (the end piece reads the rake).
+    expect(hydrostaticsAt(prepareHull(hull), d).volume).toBeRelClose(exactVolume, 1e-12);
+  });
+
+  test('a yacht with a fin over three stations: the keel turns at stations the halving drops, so no estimate', () => {
+    // Box canoe body 10 x 3 from z = 0.5 to 1.5; a fin plate 0.1 m thick from z = 0 to 0.5
+    // under stations 4, 5 and 6 m (1 m apart). The offsets cannot say where the fin ends
+    // between stations; the polyhedron they describe with straight keel lines has the fin
+    // tapering to nothing at 3 and 7 m: its volume is 10 x 3 x (d - 0.5) + 0.1 x 0.5 x 3
+    // (full depth over 4..6 m and two wedges of half that over 3..4 and 6..7 m).
+    const station = (x: number) => ({
+      x,
+      points:
+        x >= 4 && x <= 6
+          ? [{ y: 0.05, z: 0, knuckle: false }, { y: 0.05, z: 0.5, knuckle: true }, { y: 1.5, z: 0.5, knuckle: true }, { y: 1.5, z: 1.5, knuckle: false }]
+          : [{ y: 1.5, z: 0.5, knuckle: false }, { y: 1.5, z: 1.5, knuckle: false }],
+    });
+    const hull: HullModel = { name: 'fin yacht', stations: linspace(0, 10, 11).map(station) };
+    const r = errorEstimates(prepareHull(hull), [1.0]);
+    expect(ERROR_ESTIMATE_FIELDS.every(({ key }) => Number.isNaN(r.estimates[0]![key]))).toBe(true);
+    expect(r.unreliable[0]!.some((n) => /keel line turns at x = (3|5|7) m/.test(n))).toBe(true);
   });
 });
 
