@@ -7,7 +7,7 @@
  */
 import { perpendiculars, type HullModel, type Perpendiculars } from './hullModel.js';
 import { Section } from './section.js';
-import { isSpacingStep, type LengthPanel } from '../quadrature/lengthPanels.js';
+import { isSpacingStep } from '../quadrature/lengthPanels.js';
 import { applyWettedFactors } from './wettedSurface.js';
 
 export interface PreparedHull {
@@ -29,8 +29,8 @@ export interface PreparedHull {
   readonly lowestKeel: number;
   /** The lowest deck edge of the hull: drafts may not lie above it. */
   readonly lowestDeck: number;
-  /** Panels along the length of each run of stations met so far, by "from:to" (filled on use). */
-  readonly panelCache: Map<string, readonly LengthPanel[]>;
+  /** Worked once and kept: the weights along the length of each run of stations met so far, by "from:to", and the plan with every station immersed (core/upright/waterlinePlan.ts fills it on use). */
+  readonly panelCache: Map<string, unknown>;
 }
 
 export function prepareHull(hull: HullModel): PreparedHull {

@@ -34,7 +34,7 @@ import type { PreparedHull } from '../hull/preparedHull.js';
 import { commonSpacing } from '../quadrature/simpson.js';
 import { cleanMultiplier } from '../quadrature/cleanMultiplier.js';
 import type { OrdinateKind } from './waterlinePlan.js';
-import { ordinateValues, waterlinePlan } from './waterlinePlan.js';
+import { ordinateValues, planOrdinates, waterlinePlan } from './waterlinePlan.js';
 import { verticalSheet, type VerticalSheet } from './verticalSheet.js';
 
 /** One line of the sheet: an ordinate along the length. */
@@ -112,7 +112,7 @@ const fmt = (v: number): string => String(Number(v.toPrecision(10)));
 /** The calculation sheet at `draft` (m) in water of `density` (t/m³). The draft is checked as for hydrostaticsAt. */
 export function calculationSheet(p: PreparedHull, draft: number, density = SEA_WATER_DENSITY): CalculationSheet {
   checkDraft(p, draft);
-  const plan = waterlinePlan(p, draft);
+  const plan = waterlinePlan(p, draft, { pieces: true });
   // h to 12 significant digits: the interval a person reads off the offsets (2.1 - 1.4 is 0.7).
   const spacing = Number(commonSpacing(p.x).toPrecision(12));
   const commonFactor = spacing / 3;
@@ -120,8 +120,8 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
   const stations: SheetStation[] = [];
   const verticals: (VerticalSheet | null)[] = [];
   const t = { areaSM: 0, areaSMLever: 0, momentZSM: 0, ySM: 0, ySMLever: 0, ySMLever2: 0, y3SM: 0 };
-  for (const o of plan.ordinates) {
-    const v = ordinateValues(p, o, draft);
+  planOrdinates(plan).forEach((o, k) => {
+    const v = ordinateValues(p, plan, k);
     const x = o.x;
     const lever = x - xm;
     const sm = cleanMultiplier(o.weight / commonFactor);
@@ -152,7 +152,7 @@ export function calculationSheet(p: PreparedHull, draft: number, density = SEA_W
     t.ySMLever2 += row.ySMLever2;
     t.y3SM += row.y3SM;
     verticals.push(o.kind === 'station' ? verticalSheet(p.hull.stations[o.a]!.points, p.sections[o.a]!, draft) : null);
-  }
+  });
   const results = particularsFromIntegrals(
     {
       volume: commonFactor * t.areaSM,

@@ -27,7 +27,7 @@ import { valuesBetween } from '../hull/betweenStations.js';
 import { emptyValues } from '../hull/section.js';
 import { isSpacingStep } from '../quadrature/lengthPanels.js';
 import { coefficient } from './coefficientNotes.js';
-import { forwardWettedGirth, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
+import { forwardWettedGirth, isStationOrdinate, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
 
 /** Check that a draft lies within the hull; the path names it in the request. */
 export function checkDraft(p: PreparedHull, draft: number, path: readonly (string | number)[] = ['draft']): void {
@@ -61,9 +61,15 @@ export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (stati
     const lo = x[a]!;
     const hi = x[b]!;
     if (xm < lo - tol || xm > hi + tol) continue;
-    // The interval [x_i, x_i+1] of the run that holds amidships.
+    // The interval [x_i, x_i+1] of the run that holds amidships (bisection: x increases).
     let i = a;
-    while (i < b && x[i + 1]! < xm - tol) i++;
+    let upper = b;
+    while (upper - i > 1) {
+      const mid = (i + upper) >> 1;
+      if (x[mid]! < xm - tol) i = mid;
+      else upper = mid;
+    }
+    if (i + 1 <= b && x[i + 1]! < xm - tol) i++;
     if (Math.abs(x[i]! - xm) <= tol) return areaOf(i);
     if (i + 1 <= b && Math.abs(x[i + 1]! - xm) <= tol) return areaOf(i + 1);
     // Three stations: i - 1, i, i + 1 or i, i + 1, i + 2, the third the nearer to amidships
@@ -88,13 +94,13 @@ export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (stati
     return between.area;
   }
   // Amidships in an end piece, or clear of the water.
-  for (const o of plan.ordinates) {
-    if (o.kind === 'station') continue;
-    const lo = Math.min(p.x[o.a]!, p.x[o.b]!);
-    const hi = Math.max(p.x[o.a]!, p.x[o.b]!);
-    if (xm >= lo && xm <= hi) {
-      const t = (xm - p.x[o.a]!) / (p.x[o.b]! - p.x[o.a]!);
-      return valuesBetween(p.sections[o.a]!, p.sections[o.b]!, t, p.x[o.b]! - p.x[o.a]!, plan.draft).area;
+  for (let k = 0; k < plan.count; k++) {
+    if (isStationOrdinate(plan, k)) continue;
+    const a = plan.a[k]!;
+    const b = plan.b[k]!;
+    if (xm >= Math.min(x[a]!, x[b]!) && xm <= Math.max(x[a]!, x[b]!)) {
+      const t = (xm - x[a]!) / (x[b]! - x[a]!);
+      return valuesBetween(p.sections[a]!, p.sections[b]!, t, x[b]! - x[a]!, plan.draft).area;
     }
   }
   return 0;
@@ -107,7 +113,7 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   const xm = p.perp.xm;
   const n = p.x.length;
   const v = emptyValues();
-  const areas = new Map<number, number>();
+  const areas = new Array<number>(n).fill(Number.NaN);
   let vol = 0;
   let momX = 0;
   let momZ = 0;
@@ -117,10 +123,15 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   let iT = 0;
   let ws = 0;
   let yMax = 0;
-  for (const o of plan.ordinates) {
-    ordinateValues(p, o, draft, v);
-    const w = o.weight;
-    const dx = o.x - xm; // moments about amidships keep the sums well conditioned
+  const { weight, weightForward, a: at } = plan;
+  const { sections, forward } = p;
+  for (let k = 0; k < plan.count; k++) {
+    const station = isStationOrdinate(plan, k);
+    // A station's own section directly: the common case, kept out of the general reader.
+    if (station) sections[at[k]!]!.evaluate(draft, v);
+    else ordinateValues(p, plan, k, v);
+    const w = weight[k]!;
+    const dx = plan.x[k]! - xm; // moments about amidships keep the sums well conditioned
     const y = v.halfBreadth;
     vol += w * v.area;
     momX += w * v.area * dx;
@@ -130,25 +141,31 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
     awXX += w * y * dx * dx;
     iT += w * y * y * y;
     if (y > yMax) yMax = y;
-    if (o.kind === 'station') {
-      areas.set(o.a, v.area);
-      const wf = p.forward[o.a] === undefined ? 0 : o.weightForward;
+    if (station) {
+      const i = at[k]!;
+      areas[i] = v.area;
+      const wf = forward[i] === undefined ? 0 : weightForward[k]!;
       ws += (w - wf) * v.wettedGirth;
-      if (wf > 0) ws += wf * forwardWettedGirth(p, o, draft, v);
+      if (wf > 0) ws += wf * forwardWettedGirth(p, plan, k, v);
     } else ws += w * v.wettedGirth;
   }
   // Immersed end faces (a transom, a square bow) are part of the wetted surface.
-  ws += (areas.get(0) ?? 0) + (areas.get(n - 1) ?? 0);
+  ws += (Number.isNaN(areas[0]!) ? 0 : areas[0]!) + (Number.isNaN(areas[n - 1]!) ? 0 : areas[n - 1]!);
   const particulars = particularsFromIntegrals(
     { volume: vol, momentX: momX, momentZ: momZ, waterplaneArea: 2 * aw, waterplaneMomentX: 2 * awX, waterplaneSecondMomentX: 2 * awXX, iT: (2 / 3) * iT },
     xm,
     p.perp.lbp,
     density,
   );
-  const endXs = plan.ends.map((e) => e.x);
-  const lwl = Math.max(...endXs) - Math.min(...endXs);
+  let aftmost = Infinity;
+  let foremost = -Infinity;
+  for (const e of plan.ends) {
+    if (e.x < aftmost) aftmost = e.x;
+    if (e.x > foremost) foremost = e.x;
+  }
+  const lwl = foremost - aftmost;
   const bwl = 2 * yMax;
-  const am = midshipArea(p, plan, (i) => areas.get(i) ?? p.sections[i]!.evaluate(draft).area);
+  const am = midshipArea(p, plan, (i) => (Number.isNaN(areas[i]!) ? p.sections[i]!.evaluate(draft).area : areas[i]!));
   const ratio = coefficient;
   return {
     draft,

@@ -41,6 +41,7 @@ import { lengthPanels, LENGTH_RULE_TEXT, type LengthPanel } from '../quadrature/
 /** What an ordinate is: a station's own section, or a section read between two stations. */
 export type OrdinateKind = 'station' | 'end' | 'between';
 
+/** One ordinate of a plan, as an object (the plan holds them as arrays; see planOrdinates). */
 export interface PlanOrdinate {
   readonly kind: OrdinateKind;
   readonly x: number;
@@ -51,13 +52,13 @@ export interface PlanOrdinate {
   /** Fraction of the way from station a to station b (0 for a station). */
   readonly t: number;
   /** Weight along the length (m): the integral is the sum of weight x ordinate. */
-  weight: number;
+  readonly weight: number;
   /**
    * The part of `weight` from panels forward of a station that stands at a step in the
    * spacing, whose wetted girth is then read with the forward slope factors
    * (core/hull/preparedHull.ts `forward`).
    */
-  weightForward: number;
+  readonly weightForward: number;
 }
 
 /** One piece of the integration, for the calculation sheet. */
@@ -79,10 +80,28 @@ export interface WaterlineEnd {
   readonly between: readonly [number, number] | null;
 }
 
+/** Kinds as held in a plan's `kind` array. */
+export const ORDINATE_KINDS: readonly OrdinateKind[] = ['station', 'end', 'between'];
+const STATION = 0;
+const END = 1;
+const BETWEEN = 2;
+
+/**
+ * The plan at one draft. Its ordinates, in x order, are held as arrays (one entry each),
+ * since a table builds one plan per draft; planOrdinates gives them as objects.
+ */
 export interface WaterlinePlan {
   readonly draft: number;
-  /** In x order. */
-  readonly ordinates: readonly PlanOrdinate[];
+  readonly count: number;
+  /** Index into ORDINATE_KINDS. */
+  readonly kind: readonly number[];
+  readonly x: readonly number[];
+  readonly a: readonly number[];
+  readonly b: readonly number[];
+  readonly t: readonly number[];
+  readonly weight: readonly number[];
+  readonly weightForward: readonly number[];
+  /** The pieces of the integration, when asked for (PlanOptions); else empty. */
   readonly pieces: readonly PlanPiece[];
   readonly ends: readonly WaterlineEnd[];
   /** First and last station of each run of immersed stations. */
@@ -91,52 +110,58 @@ export interface WaterlinePlan {
 
 const SIMPSON_PIECE = "Simpson's first rule over the piece, its middle ordinate read between the stations";
 
-function panelsOf(p: PreparedHull, from: number, to: number): readonly LengthPanel[] {
-  const key = `${from}:${to}`;
-  let panels = p.panelCache.get(key);
-  if (panels === undefined) {
-    panels = lengthPanels(p.x, from, to);
-    p.panelCache.set(key, panels);
-  }
-  return panels;
+/** The weights of a run of stations along the length, worked once per run (core/hull/preparedHull.ts panelCache). */
+interface RunWeights {
+  readonly panels: readonly LengthPanel[];
+  /** Weight of each station of the run (index - first), single intervals by Simpson with a middle ordinate. */
+  readonly weight: Float64Array;
+  /** The part of each weight from panels forward of the station. */
+  readonly forward: Float64Array;
+  /** For each station, the weight of the middle ordinate of a single interval starting there (0 if none). */
+  readonly middle: Float64Array;
+  /** How many middle ordinates the run has. */
+  readonly middles: number;
 }
 
-/** The ordinates and weights at the level waterline `draft` (m). A draft below every keel gives an empty plan. */
-export function waterlinePlan(p: PreparedHull, draft: number): WaterlinePlan {
-  const { x, keel } = p;
-  const n = x.length;
-  const ordinates: PlanOrdinate[] = [];
-  const pieces: PlanPiece[] = [];
-  const ends: WaterlineEnd[] = [];
-  const runs: [number, number][] = [];
-  const stationOrdinate = new Map<number, number>();
-
-  const add = (o: Omit<PlanOrdinate, 'weight' | 'weightForward'>): number => {
-    ordinates.push({ ...o, weight: 0, weightForward: 0 });
-    return ordinates.length - 1;
-  };
-  const station = (i: number): number => {
-    let k = stationOrdinate.get(i);
-    if (k === undefined) {
-      k = add({ kind: 'station', x: x[i]!, a: i, b: i, t: 0 });
-      stationOrdinate.set(i, k);
+function runWeights(p: PreparedHull, from: number, to: number): RunWeights {
+  const key = `${from}:${to}`;
+  const cached = p.panelCache.get(key) as RunWeights | undefined;
+  if (cached !== undefined) return cached;
+  const panels = lengthPanels(p.x, from, to);
+  const m = to - from + 1;
+  const weight = new Float64Array(m);
+  const forward = new Float64Array(m);
+  const middle = new Float64Array(m);
+  for (const panel of panels) {
+    const k0 = panel.start - from;
+    if (panel.rule === 'single') {
+      // Simpson's first rule over the interval: h/6 at each station, 4h/6 at the middle.
+      const len = p.x[panel.start + 1]! - p.x[panel.start]!;
+      weight[k0]! += len / 6;
+      forward[k0]! += len / 6;
+      weight[k0 + 1]! += len / 6;
+      middle[k0] = (4 * len) / 6;
+      continue;
     }
-    return k;
-  };
-  /** Simpson's first rule over [xs, xe] with ordinates (start, middle, end) already placed. */
-  const simpsonPiece = (k0: number, km: number, k1: number, rule: string): void => {
-    const o0 = ordinates[k0]!;
-    const o1 = ordinates[k1]!;
-    const len = Math.abs(o1.x - o0.x);
-    o0.weight += len / 6;
-    ordinates[km]!.weight += (4 * len) / 6;
-    o1.weight += len / 6;
-    // A station at a step takes the piece forward of it with its forward factors.
-    if (o0.kind === 'station' && o1.x > o0.x) o0.weightForward += len / 6;
-    if (o1.kind === 'station' && o0.x > o1.x) o1.weightForward += len / 6;
-    pieces.push({ from: Math.min(o0.x, o1.x), to: Math.max(o0.x, o1.x), rule, ordinates: o0.x < o1.x ? [k0, km, k1] : [k1, km, k0] });
-  };
+    panel.weights.forEach((w, k) => (weight[k0 + k]! += w));
+    forward[k0]! += panel.weights[0]!;
+  }
+  let middles = 0;
+  for (let k = 0; k < m; k++) if (middle[k]! > 0) middles++;
+  const out: RunWeights = { panels, weight, forward, middle, middles };
+  p.panelCache.set(key, out);
+  return out;
+}
 
+export interface PlanOptions {
+  /** Also set out the pieces of the integration with their rules, for a calculation sheet. */
+  readonly pieces?: boolean;
+}
+
+/** The runs of consecutive stations whose keel lies below `draft`. */
+function immersedRuns(keel: Float64Array, draft: number): [number, number][] {
+  const runs: [number, number][] = [];
+  const n = keel.length;
   let i = 0;
   while (i < n) {
     if (!(keel[i]! < draft)) {
@@ -145,79 +170,187 @@ export function waterlinePlan(p: PreparedHull, draft: number): WaterlinePlan {
     }
     const a = i;
     while (i + 1 < n && keel[i + 1]! < draft) i++;
-    const b = i;
+    runs.push([a, i]);
     i++;
-    runs.push([a, b]);
+  }
+  return runs;
+}
 
-    // Aft end.
+/**
+ * The ordinates and weights at the level waterline `draft` (m), in x order. A draft below
+ * every keel gives an empty plan.
+ */
+export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptions = {}): WaterlinePlan {
+  const { x, keel } = p;
+  const n = x.length;
+  const runs = immersedRuns(keel, draft);
+  // Every station immersed: the plan does not depend on the draft (no end pieces), so it
+  // is made once and shared, which spares most of a table's allocation.
+  const whole = runs.length === 1 && runs[0]![0] === 0 && runs[0]![1] === n - 1 && options.pieces !== true;
+  if (whole) {
+    const cached = p.panelCache.get('whole plan') as WaterlinePlan | undefined;
+    if (cached !== undefined) return planOf(draft, cached);
+  }
+  const weights: RunWeights[] = [];
+  let count = 0;
+  for (const [a, b] of runs) {
+    const rw = runWeights(p, a, b);
+    weights.push(rw);
+    count += b - a + 1 + rw.middles + (a > 0 ? 2 : 0) + (b < n - 1 ? 2 : 0);
+  }
+  // Plain arrays: a table makes one plan per draft, and typed arrays cost several times
+  // more to allocate in V8 than the few dozen numbers each holds.
+  const kind = new Array<number>(count).fill(0);
+  const ox = new Array<number>(count).fill(0);
+  const oa = new Array<number>(count).fill(0);
+  const ob = new Array<number>(count).fill(0);
+  const ot = new Array<number>(count).fill(0);
+  const weight = new Array<number>(count).fill(0);
+  const weightForward = new Array<number>(count).fill(0);
+  const pieces: PlanPiece[] = [];
+  const ends: WaterlineEnd[] = [];
+  let k = 0;
+  for (let r = 0; r < runs.length; r++) {
+    const [a, b] = runs[r]!;
+    const rw = weights[r]!;
+    // Aft end: Simpson's first rule over the end piece, its end and middle read between stations a and a - 1.
+    let aftPiece = 0;
+    let kAftEnd = -1;
     if (a > 0) {
       const t = (draft - keel[a]!) / (keel[a - 1]! - keel[a]!); // fraction from station a toward a - 1
       const xEnd = x[a]! + (x[a - 1]! - x[a]!) * t;
       ends.push({ x: xEnd, side: 'aft', between: [a - 1, a] });
-      const kEnd = add({ kind: 'end', x: xEnd, a, b: a - 1, t });
-      const kMid = add({ kind: 'between', x: (xEnd + x[a]!) / 2, a, b: a - 1, t: t / 2 });
-      simpsonPiece(kEnd, kMid, station(a), SIMPSON_PIECE);
+      aftPiece = x[a]! - xEnd;
+      kAftEnd = k;
+      kind[k] = END;
+      ox[k] = xEnd;
+      oa[k] = a;
+      ob[k] = a - 1;
+      ot[k] = t;
+      weight[k++] = aftPiece / 6;
+      kind[k] = BETWEEN;
+      ox[k] = (xEnd + x[a]!) / 2;
+      oa[k] = a;
+      ob[k] = a - 1;
+      ot[k] = t / 2;
+      weight[k++] = (4 * aftPiece) / 6;
     } else ends.push({ x: x[0]!, side: 'aft', between: null });
 
-    // Inside the run.
-    for (const panel of panelsOf(p, a, b)) {
-      const ks = panel.weights.map((_, k) => station(panel.start + k));
-      if (panel.rule === 'single') {
-        const s = panel.start;
-        const kMid = add({ kind: 'between', x: (x[s]! + x[s + 1]!) / 2, a: s, b: s + 1, t: 0.5 });
-        simpsonPiece(ks[0]!, kMid, ks[1]!, SIMPSON_PIECE);
-        continue;
+    // The run's stations, each followed by the middle ordinate of a single interval starting there.
+    const first = k;
+    for (let s = a; s <= b; s++) {
+      const j = s - a;
+      kind[k] = STATION;
+      ox[k] = x[s]!;
+      oa[k] = s;
+      ob[k] = s;
+      weight[k] = rw.weight[j]! + (s === a ? aftPiece / 6 : 0);
+      weightForward[k++] = rw.forward[j]!;
+      if (rw.middle[j]! > 0) {
+        kind[k] = BETWEEN;
+        ox[k] = (x[s]! + x[s + 1]!) / 2;
+        oa[k] = s;
+        ob[k] = s + 1;
+        ot[k] = 0.5;
+        weight[k++] = rw.middle[j]!;
       }
-      panel.weights.forEach((w, k) => {
-        const o = ordinates[ks[k]!]!;
-        o.weight += w;
-        if (k === 0) o.weightForward += w;
-      });
-      pieces.push({ from: x[panel.start]!, to: x[panel.start + panel.size - 1]!, rule: LENGTH_RULE_TEXT[panel.rule], ordinates: ks });
     }
 
     // Forward end.
+    let kFwdEnd = -1;
     if (b < n - 1) {
       const t = (draft - keel[b]!) / (keel[b + 1]! - keel[b]!);
       const xEnd = x[b]! + (x[b + 1]! - x[b]!) * t;
       ends.push({ x: xEnd, side: 'fwd', between: [b, b + 1] });
-      const kMid = add({ kind: 'between', x: (x[b]! + xEnd) / 2, a: b, b: b + 1, t: t / 2 });
-      const kEnd = add({ kind: 'end', x: xEnd, a: b, b: b + 1, t });
-      simpsonPiece(station(b), kMid, kEnd, SIMPSON_PIECE);
+      const len = xEnd - x[b]!;
+      weight[k - 1]! += len / 6; // station b (a single interval cannot start at the run's last station)
+      weightForward[k - 1]! += len / 6;
+      kind[k] = BETWEEN;
+      ox[k] = (x[b]! + xEnd) / 2;
+      oa[k] = b;
+      ob[k] = b + 1;
+      ot[k] = t / 2;
+      weight[k++] = (4 * len) / 6;
+      kFwdEnd = k;
+      kind[k] = END;
+      ox[k] = xEnd;
+      oa[k] = b;
+      ob[k] = b + 1;
+      ot[k] = t;
+      weight[k++] = len / 6;
     } else ends.push({ x: x[n - 1]!, side: 'fwd', between: null });
-  }
 
-  // x order, stable (an end piece's ordinates were placed before the run's stations).
-  const order = ordinates.map((_, k) => k).sort((u, v) => ordinates[u]!.x - ordinates[v]!.x || u - v);
-  const newIndex = new Array<number>(ordinates.length);
-  order.forEach((k, j) => (newIndex[k] = j));
+    if (options.pieces === true) {
+      // Index of each station's ordinate in this run, to name the ordinates of each piece.
+      const at = new Map<number, number>();
+      for (let j = first; j < k; j++) if (kind[j] === STATION) at.set(oa[j]!, j);
+      if (kAftEnd >= 0) pieces.push({ from: ox[kAftEnd]!, to: x[a]!, rule: SIMPSON_PIECE, ordinates: [kAftEnd, kAftEnd + 1, at.get(a)!] });
+      for (const panel of rw.panels) {
+        const ks = Array.from({ length: panel.size }, (_, j) => at.get(panel.start + j)!);
+        if (panel.rule === 'single') pieces.push({ from: x[panel.start]!, to: x[panel.start + 1]!, rule: SIMPSON_PIECE, ordinates: [ks[0]!, ks[0]! + 1, ks[1]!] });
+        else pieces.push({ from: x[panel.start]!, to: x[panel.start + panel.size - 1]!, rule: LENGTH_RULE_TEXT[panel.rule], ordinates: ks });
+      }
+      if (kFwdEnd >= 0) pieces.push({ from: x[b]!, to: ox[kFwdEnd]!, rule: SIMPSON_PIECE, ordinates: [at.get(b)!, kFwdEnd - 1, kFwdEnd] });
+    }
+  }
+  const plan = planOf(draft, { count, kind, x: ox, a: oa, b: ob, t: ot, weight, weightForward, pieces, ends, runs });
+  if (whole) p.panelCache.set('whole plan', plan);
+  return plan;
+}
+
+/** One object shape for every plan, so that the loops over plans stay monomorphic in V8. */
+function planOf(draft: number, q: Omit<WaterlinePlan, 'draft'>): WaterlinePlan {
   return {
     draft,
-    ordinates: order.map((k) => ordinates[k]!),
-    pieces: pieces.map((pc) => ({ ...pc, ordinates: pc.ordinates.map((k) => newIndex[k]!) })),
-    ends,
-    runs,
+    count: q.count,
+    kind: q.kind,
+    x: q.x,
+    a: q.a,
+    b: q.b,
+    t: q.t,
+    weight: q.weight,
+    weightForward: q.weightForward,
+    pieces: q.pieces,
+    ends: q.ends,
+    runs: q.runs,
   };
 }
 
-/**
- * The section values of ordinate `o` at `draft`, into `out`. `wettedForward`, when
- * given, receives the wetted girth with the forward slope factors of a station at a
- * step (else the same as out.wettedGirth).
- */
-export function ordinateValues(p: PreparedHull, o: PlanOrdinate, draft: number, out: SectionValues = emptyValues()): SectionValues {
-  if (o.kind === 'station') return p.sections[o.a]!.evaluate(draft, out);
-  const sa = sectionFacing(p, o.a, o.b);
-  const sb = sectionFacing(p, o.b, o.a);
-  const dx = p.x[o.b]! - p.x[o.a]!;
-  if (o.kind === 'end') return keelLineEnd(sa, sb, o.t, dx, out);
-  return valuesBetween(sa, sb, o.t, dx, draft, out);
+/** The plan's ordinates as objects, in x order (for a calculation sheet). */
+export function planOrdinates(plan: WaterlinePlan): PlanOrdinate[] {
+  return Array.from({ length: plan.count }, (_, k) => ({
+    kind: ORDINATE_KINDS[plan.kind[k]!]!,
+    x: plan.x[k]!,
+    a: plan.a[k]!,
+    b: plan.b[k]!,
+    t: plan.t[k]!,
+    weight: plan.weight[k]!,
+    weightForward: plan.weightForward[k]!,
+  }));
 }
 
-/** Wetted girth of a station ordinate with the slope factors of the panels forward of it, m. */
-export function forwardWettedGirth(p: PreparedHull, o: PlanOrdinate, draft: number, scratch: SectionValues): number {
-  const fwd = p.forward[o.a];
-  return fwd === undefined ? Number.NaN : fwd.evaluate(draft, scratch).wettedGirth;
+/** The section values of ordinate `k` of the plan at its draft, into `out`. */
+export function ordinateValues(p: PreparedHull, plan: WaterlinePlan, k: number, out: SectionValues = emptyValues()): SectionValues {
+  const a = plan.a[k]!;
+  const kind = plan.kind[k]!;
+  if (kind === STATION) return p.sections[a]!.evaluate(plan.draft, out);
+  const b = plan.b[k]!;
+  const sa = sectionFacing(p, a, b);
+  const sb = sectionFacing(p, b, a);
+  const dx = p.x[b]! - p.x[a]!;
+  if (kind === END) return keelLineEnd(sa, sb, plan.t[k]!, dx, out);
+  return valuesBetween(sa, sb, plan.t[k]!, dx, plan.draft, out);
+}
+
+/** Whether ordinate `k` is a station's own. */
+export function isStationOrdinate(plan: WaterlinePlan, k: number): boolean {
+  return plan.kind[k] === STATION;
+}
+
+/** Wetted girth of station ordinate `k` with the slope factors of the panels forward of it, m. */
+export function forwardWettedGirth(p: PreparedHull, plan: WaterlinePlan, k: number, scratch: SectionValues): number {
+  const fwd = p.forward[plan.a[k]!];
+  return fwd === undefined ? Number.NaN : fwd.evaluate(plan.draft, scratch).wettedGirth;
 }
 
 /** Station i's section with the slope factors on the side facing station j. */

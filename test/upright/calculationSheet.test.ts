@@ -113,6 +113,25 @@ describe('the longitudinal sheet', () => {
     expectSheetEqualsHydrostatics(gridHull('uneven', xs, [0, 0.4, 0.9, 1.5], (x, z) => 0.5 + 0.1 * x - 0.01 * x * x + 0.3 * z), 1.1);
   });
 
+  test('multipliers and the spacing are carried clean: exactly 4, and h = 0.7 from stations 0.7 apart', () => {
+    // Stations 0, 0.7, 1.4, 2.1, 2.8 m: the differences of these doubles are 0.7 and
+    // 0.7000000000000002 (2.1 - 1.4); the sheet reads h = 0.7 and writes 1, 4, 2, 4, 1.
+    const hull = gridHull('box', [0, 0.7, 1.4, 2.1, 2.8], [0, 0.5, 1], () => 1);
+    const sheet = sheetResult(hull, calculationSheet(prepareHull(hull), 0.8));
+    expect(sheet.spacing).toBe(0.7);
+    expect(sheet.stations.map((s) => s.multiplier)).toEqual([1, 4, 2, 4, 1]);
+    expect(JSON.stringify(sheet.stations.map((s) => s.multiplier))).toBe('[1,4,2,4,1]');
+  });
+
+  test('stations in feet-inches-eighths a whole number of sixteenths apart get the trade multipliers exactly', () => {
+    // 2 ft 3 9/16 in = 27.5625 in = 0.7000875 m apart (1 in = 0.0254 m exactly): the metres
+    // carry rounding, the multipliers do not.
+    const csv = ['# units: ft-in-8', 'x,0-0-0,1-0-0,2-0-0', '0-0-0,1-0-0,1-0-0,1-0-0', '2-3-4+,1-0-0,1-0-0,1-0-0', '4-7-1,1-0-0,1-0-0,1-0-0', '6-10-5+,1-0-0,1-0-0,1-0-0', '9-2-2,1-0-0,1-0-0,1-0-0'].join('\n');
+    const sheet = calculationSheet(prepareHull(readOffsetsCsv(csv).hull), 0.5);
+    expect(sheet.spacing).toBe(0.7000875);
+    expect(sheet.stations.map((s) => s.multiplier)).toEqual([1, 4, 2, 4, 1]);
+  });
+
   test('a draft outside the hull is refused with its code', () => {
     const p = prepareHull(boxBarge(10, 4, 2));
     expect(() => calculationSheet(p, 2.5)).toThrow(HalfbreadthError);
