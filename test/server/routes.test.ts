@@ -208,6 +208,22 @@ describe('POST /v1/check', () => {
     ]);
   });
 
+  test('a table in millimetres without its units line, and keels taken at a waterline, are warned of', async () => {
+    // Read as metres the length is 10,000 m, longer than any vessel; its rows start with a
+    // blank and a flat of bottom, so each keel was taken at the 500 (mm) waterline.
+    const mm = ['x,0,500,1000', '0,,800,1000', '5000,,900,1100', '10000,,800,1000'].join('\n');
+    const body = JSON.parse((await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: mm })).body);
+    expect(body.valid).toBe(true);
+    expect(body.warnings.map((w: { code: string }) => w.code)).toEqual(['HYD_KEEL_AT_WATERLINE', 'HYD_KEEL_AT_WATERLINE', 'HYD_KEEL_AT_WATERLINE', 'HYD_PROPORTIONS']);
+    expect(body.warnings[0].path).toEqual(['offsets', 2]);
+    expect(body.warnings[3].message).toContain('mm (10 m)');
+    // A stored copy of the same file gets the same warnings (its upload is read again for them).
+    const stored = await app.inject({ method: 'POST', url: '/v1/hulls', headers: csvHeaders, payload: mm });
+    const { id } = JSON.parse(stored.body) as { id: string };
+    const again = JSON.parse((await app.inject({ method: 'GET', url: `/v1/hulls/${id}/check` })).body);
+    expect(again.warnings).toEqual(body.warnings);
+  });
+
   test('the check has no CSV form: format=csv is 406', async () => {
     expectProblem(await app.inject({ method: 'POST', url: '/v1/check?format=csv', headers: csvHeaders, payload: BOX }), 406);
   });
