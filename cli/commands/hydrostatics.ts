@@ -5,6 +5,7 @@
  */
 import { HalfbreadthError, issue, type Issue } from '../../core/common/errors.js';
 import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/common/constants.js';
+import { readDecimal } from '../../core/common/decimal.js';
 import { checkDensity } from '../../core/common/density.js';
 import { parseDraftList } from '../../core/common/draftList.js';
 import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/report/formatHydrostatics.js';
@@ -28,8 +29,7 @@ export function densityOption(values: CommandArgs['values']): number {
     return FRESH_WATER_DENSITY;
   }
   if (text === undefined) return SEA_WATER_DENSITY;
-  const value = text.trim() === '' ? Number.NaN : Number(text);
-  return checkDensity(value, ['density'], text);
+  return checkDensity(readDecimal(text), ['density'], text);
 }
 
 /** The unit system of --units: si (the default) or imperial. */

@@ -4,7 +4,7 @@
  * reader translates them to lines and columns.
  */
 import { issue, type Issue } from '../common/errors.js';
-import { LIMITS } from '../common/limits.js';
+import { LIMITS, lengthInRange, PHYSICAL_LIMITS } from '../common/limits.js';
 
 interface RuleHull {
   readonly ap?: number | undefined;
@@ -15,8 +15,34 @@ interface RuleHull {
 
 const fmt = (v: number): string => (Number.isFinite(v) ? String(Math.round(v * 1e6) / 1e6) : String(v));
 
+const RANGE = `lengths must lie within ${PHYSICAL_LIMITS.maxLength} m of the origin`;
+
+/**
+ * Lengths beyond the physical limit (core/common/limits.ts), each reported once. Checked
+ * before the other rules, which compare lengths and would only repeat the fault.
+ */
+function outOfRange(hull: RuleHull): Issue[] {
+  const found: Issue[] = [];
+  const check = (v: number, path: (string | number)[], what: string): void => {
+    if (!lengthInRange(v)) found.push(issue('HYD_VALUE_RANGE', path, `${what} ${fmt(v)} m is beyond the physical limit; ${RANGE}`));
+  };
+  if (hull.ap !== undefined) check(hull.ap, ['ap'], 'ap');
+  if (hull.fp !== undefined) check(hull.fp, ['fp'], 'fp');
+  hull.waterlines?.forEach((z, k) => check(z, ['waterlines', k], `waterline ${k + 1} at z =`));
+  hull.stations.forEach((st, i) => {
+    check(st.x, ['stations', i, 'x'], `station ${i + 1} at x =`);
+    st.points.forEach((p, j) => {
+      check(p.y, ['stations', i, 'points', j, 'y'], `station ${i + 1}, point ${j + 1}: half-breadth`);
+      check(p.z, ['stations', i, 'points', j, 'z'], `station ${i + 1}, point ${j + 1}: z =`);
+    });
+  });
+  return found;
+}
+
 /** Every rule broken by the hull, in file order; an empty list means the hull is sound. */
 export function checkHull(hull: RuleHull): Issue[] {
+  const range = outOfRange(hull);
+  if (range.length > 0) return range;
   const found: Issue[] = [];
   const { stations } = hull;
   if (stations.length < 3) {

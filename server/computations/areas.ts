@@ -10,6 +10,7 @@ import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
+import { prepareWork } from './cost.js';
 
 export const AreasResultSchema = z
   .object({
@@ -46,6 +47,7 @@ export const areas: Computation<Params, AreasResult> = {
   body: z.object({ draft: DraftBody }),
   result: AreasResultSchema,
   key: (p) => `draft=${p.draft}`,
+  cost: (hull) => ({ cells: 3 * hull.stations.length + 10, work: prepareWork(hull) + hull.stations.length }),
   run: (h, p) => areasResult(h.hull, sectionalAreaCurve(h.prepared, p.draft)),
   csv: areasCsv,
 };

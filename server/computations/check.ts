@@ -12,6 +12,10 @@ import { hullSummary, type HullSummary } from '../../core/report/formatHydrostat
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
 import type { Computation } from './computation.js';
+import { pointsOf, prepareWork } from './cost.js';
+
+/** Work units of the fairness check per offset: about 3 s for a million offsets (bench/core.bench.ts). */
+const FAIRNESS_WORK_PER_POINT = 50;
 
 const ParticularsSchema = z.object({
   form: HullFormSchema,
@@ -76,6 +80,8 @@ export const check: Computation<Record<string, never>, CheckResult> = {
   body: z.object({}),
   result: CheckResultSchema,
   key: () => '',
+  // At most one warning per offset, each about ten numbers.
+  cost: (hull) => ({ cells: 10 * pointsOf(hull), work: prepareWork(hull) + FAIRNESS_WORK_PER_POINT * pointsOf(hull) }),
   run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], warnings: fairnessWarnings(h.hull), caution: CAUTION }),
   invalid: (err: HalfbreadthError) => ({
     valid: false,

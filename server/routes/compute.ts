@@ -2,22 +2,32 @@
  * The computation routes, two per computation of computations/index.ts:
  * `POST /v1/<name>` on offsets in the body (stateless) and `GET /v1/hulls/{id}/<name>`
  * on a stored hull (with an ETag, answered 304 when the client's copy is current).
+ *
+ * Where the work runs: a small body (or stored upload) is read on the request thread
+ * and the computation's declared cost decides; work up to SERVICE_LIMITS.inlineWork (a
+ * table of a few dozen drafts) is done here, where handing it to a thread would cost
+ * more than it saves, and anything heavier, or any large body, goes to the worker
+ * threads (server/jobs/), so the request thread stays free.
  */
 import type { FastifyRequest } from 'fastify';
 import { HalfbreadthError, fail } from '../../core/common/errors.js';
 import { COMPUTATIONS } from '../computations/index.js';
 import { formatsOf, requestSchemas, type AnyComputation } from '../computations/computation.js';
+import { checkAnswerSize } from '../computations/cost.js';
+import type { ServiceContext } from '../context.js';
 import { answerNotModified, etagOf } from '../etag.js';
-import { hullFromCsv, hullFromJson, loadHull, type LoadedHull } from '../hullInput.js';
+import { loadHull, type LoadedHull } from '../hullInput.js';
+import { computeAnswer, readSource, renderResult, type ComputeJob, type HullSource } from '../jobs/job.js';
+import type { KeptAnswer } from '../answerCache.js';
 import { chooseFormat } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, type Format } from '../requestFields.js';
-import { parseOrFail, requireObject } from '../validate.js';
-import { renderResult, sendAnswer, sendResult } from './answer.js';
+import { parseOrFail } from '../validate.js';
+import { sendAnswer } from './answer.js';
 import type { RouteSpec } from './routeSpec.js';
 import { requireHullMeta } from './storedHull.js';
 
-const COMPUTE_PROBLEMS = [400, 406, 413, 415, 422];
+const COMPUTE_PROBLEMS = [400, 406, 413, 415, 422, 503];
 
 /** With a JSON body the parameters go in the body: say so when they are in the query. */
 function paramsNotInQuery(c: AnyComputation, req: FastifyRequest): void {
@@ -27,14 +37,50 @@ function paramsNotInQuery(c: AnyComputation, req: FastifyRequest): void {
   }
 }
 
-/** Read the body's hull; offsets that break a rule are the answer for a computation that says so (the check). */
-function readBodyHull(c: AnyComputation, read: () => LoadedHull): { hull: LoadedHull } | { invalid: unknown } {
-  try {
-    return { hull: read() };
-  } catch (e) {
-    if (e instanceof HalfbreadthError && c.invalid !== undefined) return { invalid: c.invalid(e) };
-    throw e;
+/** Aborted when the client closes its connection before the answer is sent: its job is then stopped. */
+function clientGone(req: FastifyRequest): AbortSignal {
+  const ac = new AbortController();
+  req.raw.once('close', () => {
+    if (!req.raw.complete || req.raw.socket?.destroyed === true) ac.abort();
+  });
+  req.socket?.once('close', () => ac.abort());
+  return ac.signal;
+}
+
+/**
+ * The answer of a job: on this thread when it is small, else in a worker. `loaded` gives
+ * the hull when it is at hand already (a stored hull from the cache), else it is read
+ * here from a small source; `forWorker` is the job as a worker takes it (a stored
+ * hull's model text is fetched only when it goes there).
+ */
+async function answerOf(
+  ctx: ServiceContext,
+  req: FastifyRequest,
+  c: AnyComputation,
+  job: ComputeJob,
+  bytes: number,
+  loaded?: () => LoadedHull,
+  forWorker: () => ComputeJob = () => job,
+): Promise<KeptAnswer> {
+  const inWorker = async (): Promise<KeptAnswer> => (await ctx.pool.run(forWorker(), clientGone(req))) as KeptAnswer;
+  if (bytes > ctx.limits.inlineBytes) return inWorker();
+  let hull: LoadedHull;
+  let params = job.params;
+  if (loaded !== undefined) hull = loaded();
+  else {
+    try {
+      const input = readSource(c, job.source, job.params);
+      params = input.params;
+      hull = loadHull(input.read);
+    } catch (e) {
+      if (e instanceof HalfbreadthError && c.invalid !== undefined) return renderResult(c, c.invalid(e), job.format, job.filename);
+      throw e;
+    }
   }
+  const cost = c.cost(hull.hull, params);
+  checkAnswerSize(c.name, cost, ctx.limits.maxAnswerCells);
+  if (cost.work > ctx.limits.inlineWork) return inWorker();
+  return computeAnswer(c, hull, params, job.format, job.filename);
 }
 
 function postRoute(c: AnyComputation): RouteSpec {
@@ -51,27 +97,24 @@ function postRoute(c: AnyComputation): RouteSpec {
     body: { csv: true, json: s.jsonBodyDocument },
     responses: { 200: { description: c.summary, json: c.result, ...(c.csv ? { csv: 'the same table as CSV, the caution on its first line' } : {}) } },
     problems: COMPUTE_PROBLEMS,
-    handler: (req, reply) => {
+    handler: async (req, reply, ctx) => {
       const upload = uploadOf(req);
       let format: Format;
       let params: unknown;
-      let read: () => LoadedHull;
+      let source: HullSource;
       if (upload.mediaType === 'text/csv') {
         const q = parseOrFail(s.query, req.query, FIELD_CODES);
         format = chooseFormat(req, q.format as Format | undefined, formatsOf(c));
         params = q;
-        read = () => loadHull(hullFromCsv(upload.text));
+        source = { kind: 'csv', text: upload.text };
       } else {
         paramsNotInQuery(c, req);
         const q = parseOrFail(s.jsonQuery, req.query, FIELD_CODES);
         format = chooseFormat(req, q.format as Format | undefined, formatsOf(c));
-        const body = parseOrFail(s.jsonBody, requireObject(upload.json, `{"offsets": <hull model>${Object.keys(c.body.shape).map((k) => `, "${k}"`).join('')}}`), FIELD_CODES);
-        params = body;
-        read = () => loadHull(hullFromJson(body.offsets));
+        source = { kind: 'json', text: upload.text };
       }
-      const got = readBodyHull(c, read);
-      const result = 'hull' in got ? c.run(got.hull, params) : got.invalid;
-      return sendResult(reply, c, result, format, c.name);
+      const job: ComputeJob = { kind: 'compute', computation: c.name, source, params, format, filename: c.name };
+      return sendAnswer(reply, await answerOf(ctx, req, c, job, upload.bytes.length));
     },
   };
 }
@@ -90,8 +133,8 @@ function getRoute(c: AnyComputation): RouteSpec {
       200: { description: c.summary, json: c.result, ...(c.csv ? { csv: 'the same table as CSV, the caution on its first line' } : {}), headers: ['ETag'] },
       304: { description: 'the copy named in If-None-Match is current' },
     },
-    problems: [400, 404, 406, 422],
-    handler: (req, reply, ctx) => {
+    problems: [400, 404, 406, 422, 503],
+    handler: async (req, reply, ctx) => {
       const meta = requireHullMeta(ctx.store, req);
       const q = parseOrFail(s.query, req.query, FIELD_CODES);
       const format = chooseFormat(req, q.format as Format | undefined, formatsOf(c));
@@ -99,7 +142,20 @@ function getRoute(c: AnyComputation): RouteSpec {
       if (answerNotModified(req, reply, etag)) return reply;
       let answer = ctx.answers.get(etag);
       if (answer === undefined) {
-        answer = renderResult(c, c.run(ctx.cache.get(meta), q), format, `${meta.id}-${c.name}`);
+        // A large stored hull is not read on this thread at all: its model's text goes to a worker.
+        const stored = (modelText: string): ComputeJob => ({
+          kind: 'compute',
+          computation: c.name,
+          source: { kind: 'stored', modelText, form: meta.form, units: meta.units },
+          params: q,
+          format,
+          filename: `${meta.id}-${c.name}`,
+        });
+        const withModel = (): ComputeJob => stored(ctx.store.modelText(meta.id) ?? '{}');
+        answer =
+          meta.bytes <= ctx.limits.inlineBytes
+            ? await answerOf(ctx, req, c, stored(''), 0, () => ctx.cache.get(meta), withModel)
+            : await answerOf(ctx, req, c, withModel(), meta.bytes);
         ctx.answers.set(etag, answer);
       }
       return sendAnswer(reply, answer);
