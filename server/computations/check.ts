@@ -80,8 +80,8 @@ export const check: Computation<Record<string, never>, CheckResult> = {
   body: z.object({}),
   result: CheckResultSchema,
   key: () => '',
-  // At most one warning per offset, each about ten numbers.
-  cost: (hull) => ({ cells: 10 * pointsOf(hull), work: prepareWork(hull) + FAIRNESS_WORK_PER_POINT * pointsOf(hull) }),
+  // At most one warning per offset (a fair table has none; an unfair one a few per line).
+  cost: (hull) => ({ cells: pointsOf(hull), work: prepareWork(hull) + FAIRNESS_WORK_PER_POINT * pointsOf(hull) }),
   run: (h) => ({ valid: true, hull: hullSummary(h.hull), particulars: particulars(h), issues: [], warnings: fairnessWarnings(h.hull), caution: CAUTION }),
   invalid: (err: HalfbreadthError) => ({
     valid: false,

@@ -5,7 +5,7 @@
  * threads, a bounded queue (503 with Retry-After when it is full), each job stopped
  * after SERVICE_LIMITS.computeTimeout (its thread is terminated, 503), and a heap limit
  * per thread (a job that needs more is stopped, 503). A request whose client goes away
- * stops its job too.
+ * stops its job too. The threads run at a lower priority than the request thread.
  *
  * The pool is made on the first heavy job, so a service (or a test) that never has one
  * starts no thread; closing the app destroys it.
@@ -42,6 +42,9 @@ export class ComputePool {
       maxQueue: this.limits.workerQueue,
       idleTimeout: 60_000,
       resourceLimits: { maxOldGenerationSizeMb: this.limits.workerHeapMb },
+      // Worker threads run at a lower priority than the request thread (nice +10, Linux
+      // and macOS), so that on a busy machine the scheduler serves requests first.
+      niceIncrement: 10,
     });
     const timeout = AbortSignal.timeout(this.limits.computeTimeout);
     const signal = cancelled === undefined ? timeout : AbortSignal.any([timeout, cancelled]);

@@ -62,7 +62,10 @@ async function answerOf(
   loaded?: () => LoadedHull,
   forWorker: () => ComputeJob = () => job,
 ): Promise<KeptAnswer> {
-  const inWorker = async (): Promise<KeptAnswer> => (await ctx.pool.run(forWorker(), clientGone(req))) as KeptAnswer;
+  const inWorker = async (work?: number): Promise<KeptAnswer> => {
+    req.log.info({ computation: c.name, bytes, work }, 'computation sent to a worker thread');
+    return (await ctx.pool.run(forWorker(), clientGone(req))) as KeptAnswer;
+  };
   if (bytes > ctx.limits.inlineBytes) return inWorker();
   let hull: LoadedHull;
   let params = job.params;
@@ -79,7 +82,7 @@ async function answerOf(
   }
   const cost = c.cost(hull.hull, params);
   checkAnswerSize(c.name, cost, ctx.limits.maxAnswerCells);
-  if (cost.work > ctx.limits.inlineWork) return inWorker();
+  if (cost.work > ctx.limits.inlineWork) return inWorker(cost.work);
   return computeAnswer(c, hull, params, job.format, job.filename);
 }
 

@@ -1,0 +1,144 @@
+/**
+ * Heavy work off the request thread: a large computation runs in a worker thread while
+ * `/healthz` and a small table are answered within 50 ms; a small table stays on the
+ * request thread (no thread is even started); the answers are the same wherever the work
+ * ran; and a computation past its time limit is stopped with a problem document.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, test } from 'vitest';
+import { buildApp } from '../../server/app.js';
+import { startService } from '../fixtures/serviceProcess.js';
+import { csvHeaders, expectProblem } from '../fixtures/serverHelpers.js';
+import { readFileSync } from 'node:fs';
+
+const dirs: string[] = [];
+afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));
+
+const workboat = readFileSync(new URL('../../offsets-demo/workboat.csv', import.meta.url), 'utf8');
+
+/** A fair grid of `stations` x `waterlines` (a smooth bilge-less form), as text. */
+function largeGrid(stations: number, waterlines: number): string {
+  const zs = Array.from({ length: waterlines }, (_, j) => (2 * j) / (waterlines - 1));
+  const lines = [`x,${zs.join(',')}`];
+  for (let i = 0; i < stations; i++) {
+    const x = (100 * i) / (stations - 1);
+    const b = 2 + Math.sin((Math.PI * i) / (stations - 1));
+    lines.push(`${x},${zs.map((z) => (b * (0.5 + z / 4)).toFixed(5)).join(',')}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+describe('the request thread stays free', () => {
+  test('healthz and a 20-draft table are answered within 50 ms while the check of 400,000 offsets runs', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'halfbreadth-workers-'));
+    dirs.push(dir);
+    const service = await startService({ HALFBREADTH_DATA: dir });
+    try {
+      // The check of 1,000 x 400 offsets takes seconds of work in a worker thread (about
+      // 1.5 s on a 2-core machine), far longer than the ten probes below (tens of ms), so they overlap it.
+      const heavy = fetch(`${service.base}/v1/check`, { method: 'POST', headers: csvHeaders, body: largeGrid(1000, 400) });
+      let done = false;
+      void heavy.then(() => (done = true));
+      // The service logs when the job has gone to a worker: the body is in and the loop is free.
+      await service.logged((l) => l.msg === 'computation sent to a worker thread');
+      const drafts = Array.from({ length: 20 }, (_, k) => (0.3 + 0.09 * k).toFixed(2)).join(',');
+      const probe = async (url: string): Promise<number> => {
+        const t0 = performance.now();
+        const res = await fetch(url);
+        await res.text();
+        expect(res.status).toBe(200);
+        return performance.now() - t0;
+      };
+      // The bound is a property of the service, 50 ms; a round trip is about 1 to 5 ms here.
+      // Another process on a shared 2-core machine can still hold the CPU for a time slice
+      // now and then, so a probe over the bound is taken again once: a blocked event loop
+      // (the defect, seconds long) misses both, a scheduling hiccup does not.
+      const within = async (url: string): Promise<number> => {
+        const first = await probe(url);
+        return first < 50 ? first : probe(url);
+      };
+      const times: number[] = [];
+      for (let k = 0; k < 5; k++) {
+        times.push(await within(`${service.base}/healthz`));
+        times.push(await within(`${service.base}/v1/hulls/demo-workboat/hydrostatics?drafts=${drafts}&density=${1 + k / 1000}`));
+      }
+      expect(done, 'the heavy request was still running while the probes were answered').toBe(false);
+      for (const t of times) expect(t).toBeLessThan(50);
+      const res = await heavy;
+      expect(res.status).toBe(200);
+      const body = (await res.json()) as { valid: boolean; particulars: { points: number } };
+      expect(body.valid).toBe(true);
+      expect(body.particulars.points).toBe(400_000);
+    } finally {
+      await service.stop();
+    }
+  }, 60_000);
+});
+
+describe('where the work runs', () => {
+  test('a 20-draft table stays on the request thread: no worker thread is started', async () => {
+    const app = await buildApp();
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/hydrostatics?drafts=0.5:0.05:1.45', headers: csvHeaders, payload: workboat });
+      expect(res.statusCode).toBe(200);
+      expect(app.halfbreadth.pool.threads).toBe(0);
+    } finally {
+      await app.close();
+    }
+  });
+
+  test('answers and problems are the same whether the work ran on the request thread or in a worker', async () => {
+    const inline = await buildApp();
+    // Every body and every computation to the workers.
+    const workers = await buildApp({ limits: { inlineBytes: 0, inlineWork: 0 } });
+    try {
+      const requests = [
+        { method: 'POST', url: '/v1/hydrostatics?drafts=0.5:0.1:1.5', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/sheet?draft=1.2&format=csv', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/check', headers: csvHeaders, payload: workboat.replace(/\n([^#\n][^,\n]*),/, '\n$1,-1,') },
+        { method: 'POST', url: '/v1/hydrostatics?drafts=9', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/bonjean', headers: { 'content-type': 'application/json' }, payload: JSON.stringify({ offsets: { stations: [] }, drafts: [1] }) },
+      ] as const;
+      for (const r of requests) {
+        const a = await inline.inject(r);
+        const b = await workers.inject(r);
+        expect(b.statusCode, r.url).toBe(a.statusCode);
+        expect(b.headers['content-type']).toBe(a.headers['content-type']);
+        expect(b.body.replace(/"requestId":"[^"]*"/, '')).toBe(a.body.replace(/"requestId":"[^"]*"/, ''));
+      }
+      expect(workers.halfbreadth.pool.threads).toBeGreaterThan(0);
+    } finally {
+      await inline.close();
+      await workers.close();
+    }
+  });
+
+  test('a computation past its time limit is stopped: 503 with a problem document naming the limit', async () => {
+    const app = await buildApp({ limits: { computeTimeout: 200, inlineWork: 0 } });
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: largeGrid(1000, 400) });
+      const doc = expectProblem(res, 503);
+      expect(doc.errors[0]!.code).toBe('HYD_COMPUTE_LIMIT');
+      expect(doc.detail).toContain('computeTimeout');
+      // The service goes on answering.
+      const again = await app.inject({ method: 'GET', url: '/healthz' });
+      expect(again.statusCode).toBe(200);
+    } finally {
+      await app.close();
+    }
+  });
+
+  test('an answer over the size limit is refused before anything is computed, naming the limit', async () => {
+    const app = await buildApp({ limits: { maxAnswerCells: 1000 } });
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/bonjean?drafts=0.1:0.01:2', headers: csvHeaders, payload: workboat });
+      const doc = expectProblem(res, 422);
+      expect(doc.errors[0]!.code).toBe('HYD_ANSWER_TOO_LARGE');
+      expect(doc.detail).toContain('maxAnswerCells');
+    } finally {
+      await app.close();
+    }
+  });
+});
