@@ -10,6 +10,7 @@ import { checkDensity } from '../../core/common/density.js';
 import { parseDraftList } from '../../core/common/draftList.js';
 import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/report/formatHydrostatics.js';
 import { errorEstimates } from '../../core/upright/errorEstimate.js';
+import { requireFormedRows } from '../../core/upright/formedRows.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import type { UnitSystem } from '../../core/report/hydrostaticsReport.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
@@ -114,12 +115,14 @@ Example:
       // Drafts are typed in feet when the table is asked for in imperial units.
       const metres = units === 'imperial' ? drafts!.map((d) => d * IMPERIAL_FACTORS.metresPerFoot) : drafts!;
       const rows = hydrostaticTable(prepared, metres, density!);
+      requireFormedRows(rows);
       const errorEstimate = values['error-estimate'] === true ? errorEstimates(prepared, metres, density!) : undefined;
       const report = hydrostaticsReport(hull, density!, rows, { units: units!, ...(errorEstimate === undefined ? {} : { errorEstimate }) });
       io.stdout.write(format === 'json' ? toJson(report) + '\n' : format === 'csv' ? reportCsv(report) : terminalSafe(reportText(report)));
       return EXIT.ok;
     }
     const rows = hydrostaticTable(prepared, drafts!, density!);
+    requireFormedRows(rows);
     const result = hydrostaticResult(hull, density!, rows);
     const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : terminalSafe(hydrostaticsText(result));
     io.stdout.write(text);
