@@ -34,6 +34,12 @@ export const LIMITS = {
 export const PHYSICAL_LIMITS = {
   /** Largest magnitude of a length, m. */
   maxLength: 10_000,
+  /**
+   * Least interval between neighbouring stations and between neighbouring waterlines of a
+   * grid, m: 1 mm. Closer ones are a typing error (a slipped exponent), and would make
+   * Simpson's weights and the slopes of the surface overflow (common practice, no source).
+   */
+  minSpacing: 0.001,
 } as const;
 
 /** True when `v` is a finite length within PHYSICAL_LIMITS.maxLength of the origin. */

@@ -84,7 +84,7 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
       case 'HYD_VALUE_RANGE':
         // In the grid form every point's z is a header height, whose own issue stands for it.
         if (grid && f.path[0] === 'stations' && f.path[4] === 'z') break;
-        put(f, s, `${s.text}${label} ${f.message.slice(f.message.indexOf(' is beyond') + 1)}`);
+        put(f, s, `${s.text}${label}: ${f.message.slice(f.message.indexOf(' m: ') + 4)}`);
         break;
       case 'HYD_X_NOT_INCREASING': {
         const p = typeof i === 'number' && i > 0 ? xSpot(i - 1) : {};

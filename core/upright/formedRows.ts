@@ -21,6 +21,9 @@ const label = (key: string): string => HYDROSTATIC_FIELDS.find((f) => f.key === 
 /** The issue of one draft's particulars, or undefined when they are all formed. */
 function formedIssue(draft: number, values: Partial<Record<HydrostaticField, number>>, path: readonly (string | number)[]): Issue | undefined {
   const where = `draft ${draft} m`;
+  if (values.volume! < 0) {
+    return issue('HYD_NOT_IMMERSED', path, `${where}: the immersed volume comes out negative (${values.volume!.toPrecision(4)} m3): the stations are spaced too unevenly for Simpson's rule (an interval far shorter than the one beside it); space them more evenly`);
+  }
   if (!(values.volume! > 0)) {
     return issue('HYD_NOT_IMMERSED', path, `${where}: the hull has no immersed volume at this draft (its half-breadths below it are zero, or it lies too close to the keel), so the centres and moments of buoyancy cannot be formed; give a draft where the hull has breadth`);
   }

@@ -37,14 +37,20 @@ function paramsNotInQuery(c: AnyComputation, req: FastifyRequest): void {
   }
 }
 
-/** Aborted when the client closes its connection before the answer is sent: its job is then stopped. */
-function clientGone(req: FastifyRequest): AbortSignal {
+/**
+ * Run a job in a worker thread, stopped if the client closes its connection before the
+ * answer is ready (nobody would read it).
+ */
+async function inWorkerFor(ctx: ServiceContext, req: FastifyRequest, job: ComputeJob): Promise<KeptAnswer> {
   const ac = new AbortController();
-  req.raw.once('close', () => {
-    if (!req.raw.complete || req.raw.socket?.destroyed === true) ac.abort();
-  });
-  req.socket?.once('close', () => ac.abort());
-  return ac.signal;
+  const gone = (): void => ac.abort();
+  const socket = req.socket;
+  socket?.once('close', gone);
+  try {
+    return (await ctx.pool.run(job, ac.signal)) as KeptAnswer;
+  } finally {
+    socket?.off('close', gone);
+  }
 }
 
 /**
@@ -64,7 +70,7 @@ async function answerOf(
 ): Promise<KeptAnswer> {
   const inWorker = async (work?: number): Promise<KeptAnswer> => {
     req.log.info({ computation: c.name, bytes, work }, 'computation sent to a worker thread');
-    return (await ctx.pool.run(forWorker(), clientGone(req))) as KeptAnswer;
+    return inWorkerFor(ctx, req, forWorker());
   };
   if (bytes > ctx.limits.inlineBytes) return inWorker();
   let hull: LoadedHull;

@@ -91,13 +91,14 @@ const gridHullsApart = (gap: number) => fc.integer({ min: 2, max: 8 }).chain((nw
   if (fp !== undefined) hull.fp = fp;
   return hull;
 });
-const gridHulls = gridHullsApart(1e-3);
+// Apart by more than the least spacing a hull may have (1 mm, PHYSICAL_LIMITS.minSpacing), rounding of the sums included.
+const gridHulls = gridHullsApart(2e-3);
 
 /** Random sound hulls in the points form: z rising through each station, knuckles anywhere. */
 const pointsHulls = fc
   .record({
     name: names,
-    xs: fc.tuple(length(-50, 50), fc.array(length(1e-3, 20), { minLength: 2, maxLength: 9 })).map(([x0, g]) => cumulative(x0, g)),
+    xs: fc.tuple(length(-50, 50), fc.array(length(2e-3, 20), { minLength: 2, maxLength: 9 })).map(([x0, g]) => cumulative(x0, g)),
     sections: fc.array(
       fc.record({
         z0: length(-1, 3),
