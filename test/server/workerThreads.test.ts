@@ -53,12 +53,15 @@ describe('the request thread stays free', () => {
         return performance.now() - t0;
       };
       // The bound is a property of the service, 50 ms; a round trip is about 1 to 5 ms here.
-      // Another process on a shared 2-core machine can still hold the CPU for a time slice
-      // now and then, so a probe over the bound is taken again once: a blocked event loop
-      // (the defect, seconds long) misses both, a scheduling hiccup does not.
+      // On a shared 2-core machine other processes (the other test files, other sessions)
+      // can hold both cores for a few time slices now and then, for client and service
+      // alike, so a probe over the bound is taken again, up to three tries: a blocked
+      // event loop (the defect: the probe waits out the whole computation, seconds) misses
+      // every try; a scheduling hiccup does not last three round trips.
       const within = async (url: string): Promise<number> => {
-        const first = await probe(url);
-        return first < 50 ? first : probe(url);
+        let t = Number.POSITIVE_INFINITY;
+        for (let attempt = 0; attempt < 3 && !(t < 50); attempt++) t = await probe(url);
+        return t;
       };
       const times: number[] = [];
       for (let k = 0; k < 5; k++) {
