@@ -23,9 +23,9 @@ import { fromWire, type Job, type JobOutcome, type JobValue } from './job.js';
  * (test/globalSetup.ts builds dist/ before the tests run).
  */
 function workerFile(): string {
-  const beside = fileURLToPath(new URL('./worker.js', import.meta.url));
+  const beside = fileURLToPath(new URL('./workerEntry.cjs', import.meta.url));
   if (existsSync(beside)) return beside;
-  return fileURLToPath(new URL('../../dist/server/jobs/worker.js', import.meta.url));
+  return fileURLToPath(new URL('../../dist/server/jobs/workerEntry.cjs', import.meta.url));
 }
 
 export class ComputePool {
