@@ -58,3 +58,9 @@ export function requireFormed(draft: number, results: LengthParticulars, path: r
   const found = formedIssue(draft, results, () => path);
   if (found !== undefined) throw new HalfbreadthError([found]);
 }
+
+/** A curve of sectional areas at a draft has an LCB only where the hull has immersed volume there. */
+export function requireImmersed(draft: number, volume: number, path: readonly (string | number)[] = ['draft']): void {
+  const found = formedIssue(draft, { volume, waterplaneArea: 1 }, () => path);
+  if (found !== undefined) throw new HalfbreadthError([found]);
+}
