@@ -117,6 +117,39 @@ describe('where the work runs', () => {
     }
   });
 
+  test('storing, reading and computing on a stored hull give the same answers when a worker reads and writes it', async () => {
+    const inline = await buildApp();
+    const workers = await buildApp({ limits: { inlineBytes: 0, inlineWork: 0 } });
+    try {
+      const strip = (body: string): unknown => {
+        const { id: _id, created: _c, updated: _u, links: _l, ...rest } = JSON.parse(body) as Record<string, unknown>;
+        return rest;
+      };
+      const ids: string[] = [];
+      for (const app of [inline, workers]) {
+        const res = await app.inject({ method: 'POST', url: '/v1/hulls?name=threads', headers: csvHeaders, payload: workboat });
+        expect(res.statusCode).toBe(201);
+        ids.push((JSON.parse(res.body) as { id: string }).id);
+      }
+      const [a, b] = ids as [string, string];
+      const get = (app: typeof inline, id: string, rest: string) => app.inject({ method: 'GET', url: `/v1/hulls/${id}${rest}` });
+      expect(strip((await get(workers, b, '')).body)).toEqual(strip((await get(inline, a, '')).body));
+      for (const rest of ['?format=csv', '?format=csv&units=ft-in-8', '/hydrostatics?drafts=0.5:0.1:1.5', '/sheet?draft=1&format=csv', '/check']) {
+        const x = await get(inline, a, rest);
+        const y = await get(workers, b, rest);
+        expect(y.statusCode, rest).toBe(200);
+        expect(y.body, rest).toBe(x.body);
+      }
+      const put = await workers.inject({ method: 'PUT', url: `/v1/hulls/${b}`, headers: { ...csvHeaders, 'if-match': (await get(workers, b, '')).headers.etag as string }, payload: workboat });
+      expect(put.statusCode).toBe(200);
+      const bad = await workers.inject({ method: 'POST', url: '/v1/hulls', headers: csvHeaders, payload: 'x,0,1\n0,1e308,1\n1,1,1\n2,1,1\n' });
+      expect(expectProblem(bad, 422).errors[0]!.code).toBe('HYD_VALUE_RANGE');
+    } finally {
+      await inline.close();
+      await workers.close();
+    }
+  });
+
   test('a computation past its time limit is stopped: 503 with a problem document naming the limit', async () => {
     // 1.5 s: well past a worker thread's start (a few hundred ms), so the job is stopped
     // while it runs, not while its thread loads; the check of 1,500 x 300 offsets takes
