@@ -150,6 +150,23 @@ describe('where the work runs', () => {
     }
   });
 
+  test('the probe that froze the service for 47 s (5,000 rows of half-breadths 1e100 to 1e308 sent to check) is answered at once', async () => {
+    const app = await buildApp();
+    try {
+      const rows = Array.from({ length: 5000 }, (_, i) => `${i},1e${100 + ((i * 37) % 209)}`);
+      const t0 = performance.now();
+      const res = await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: ['x,0,1', ...rows].join('\n') });
+      // A bound on the defect (47 s of the event loop before), with a wide margin.
+      expect(performance.now() - t0).toBeLessThan(3000);
+      expect(res.statusCode).toBe(200);
+      const body = JSON.parse(res.body) as { valid: boolean; issues: { code: string }[] };
+      expect(body.valid).toBe(false);
+      expect(body.issues[0]!.code).toBe('HYD_VALUE_RANGE');
+    } finally {
+      await app.close();
+    }
+  });
+
   test('a computation past its time limit is stopped: 503 with a problem document naming the limit', async () => {
     // 1.5 s: well past a worker thread's start (a few hundred ms), so the job is stopped
     // while it runs, not while its thread loads; the check of 1,500 x 300 offsets takes
