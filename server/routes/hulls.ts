@@ -177,7 +177,7 @@ function source(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): 
   const ext = src.mediaType === 'text/csv' ? 'csv' : 'json';
   return reply
     .type(src.mediaType === 'text/csv' ? 'text/csv; charset=utf-8' : JSON_MEDIA_TYPE)
-    .header('content-disposition', `attachment; filename="${ext === 'csv' ? meta.id : meta.id}.${ext}"`)
+    .header('content-disposition', `attachment; filename="${meta.id}.${ext}"`)
     .send(src.bytes);
 }
 

@@ -109,7 +109,7 @@ describe(`a corpus of ${N} mutated offsets files`, () => {
   test('gets no 5xx and no NaN, Infinity or undocumented null from the service', async () => {
     for (let k = 0; k < N; k++) {
       const payload = corpus[k]!;
-      const drafts = k % 7 === 0 ? '5e-324,0.5,1' : '0.3,0.5,1,1.5';
+      const drafts = k % 7 === 0 ? '5e-324,0.5' : '0.3,1.5';
       const post = (url: string) => app.inject({ method: 'POST', url, headers: csvHeaders, payload });
       let r = await post(`/v1/hydrostatics?drafts=${drafts}`);
       look(k, 'hydrostatics', r.statusCode, r.body, schemaOf('hydrostatics'));

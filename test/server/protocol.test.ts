@@ -65,7 +65,7 @@ describe("Node's own answers are problem documents", () => {
     expect(doc.errors[0]!.code).toBe('HYD_HEADERS_TOO_LARGE');
   });
 
-  test('a body that does not arrive in time: 408, and the socket is closed within the timeout and its check', async () => {
+  test.concurrent('a body that does not arrive in time: 408, and the socket is closed within the timeout and its check', async () => {
     const { text, closedAfter } = await exchange((s) => s.write('POST /v1/check HTTP/1.1\r\nHost: x\r\nContent-Type: text/csv\r\nContent-Length: 100\r\n\r\nx,0,1\n'));
     const doc = expectProblem(parse(text), 408);
     expect(doc.errors[0]!.code).toBe('HYD_REQUEST_TIMEOUT');
@@ -74,14 +74,14 @@ describe("Node's own answers are problem documents", () => {
     expect(closedAfter).toBeLessThan(REQUEST_TIMEOUT + 1000);
   });
 
-  test('a connection that sends nothing gets 408 at the headers timeout', async () => {
+  test.concurrent('a connection that sends nothing gets 408 at the headers timeout', async () => {
     const { text, closedAfter } = await exchange(() => undefined);
     expect(expectProblem(parse(text), 408).errors[0]!.code).toBe('HYD_REQUEST_TIMEOUT');
     expect(closedAfter).toBeGreaterThan(HEADERS_TIMEOUT - 50);
     expect(closedAfter).toBeLessThan(HEADERS_TIMEOUT + 1000);
   });
 
-  test('a kept-alive socket with no next request is closed after the keep-alive timeout', async () => {
+  test.concurrent('a kept-alive socket with no next request is closed after the keep-alive timeout', async () => {
     let answered = 0;
     const { text, closedAfter } = await exchange((s) => {
       s.write('GET /healthz HTTP/1.1\r\nHost: x\r\n\r\n');
