@@ -89,7 +89,9 @@ describe("Node's own answers are problem documents", () => {
     });
     expect(text.startsWith('HTTP/1.1 200')).toBe(true);
     expect(answered).toBeGreaterThan(0);
-    expect(closedAfter).toBeLessThan(KEEP_ALIVE_TIMEOUT + 1500);
+    // Node closes a kept-alive socket a second after keepAliveTimeout (its buffer against
+    // clients racing the close); 1.5 s more is margin for a busy machine.
+    expect(closedAfter).toBeLessThan(KEEP_ALIVE_TIMEOUT + 1000 + 1500);
   });
 });
 
