@@ -41,8 +41,8 @@ export const SERVICE_LIMITS = {
    * 20-draft table of a demo hull is about 1,000; 40,000 is about 3 ms.
    */
   inlineWork: 40_000,
-  /** Bodies (and stored uploads) above this size are read in a worker thread, bytes. */
-  inlineBytes: 256 * 1024,
+  /** Bodies (and stored uploads) above this size are read in a worker thread, bytes: reading 64 KiB of offsets takes a few ms. */
+  inlineBytes: 64 * 1024,
   /** Worker threads for heavy computations: one fewer than the cores, at least one. */
   workerThreads: Math.max(1, availableParallelism() - 1),
   /** Heavy computations waiting for a worker at most; more get 503 with Retry-After. */

@@ -16,6 +16,7 @@ import { formatsOf, requestSchemas, type AnyComputation } from '../computations/
 import { checkAnswerSize } from '../computations/cost.js';
 import type { ServiceContext } from '../context.js';
 import { answerNotModified, etagOf } from '../etag.js';
+import type { HullModel } from '../../core/hull/hullModel.js';
 import { loadHull, type LoadedHull } from '../hullInput.js';
 import { computeAnswer, readSource, renderResult, type ComputeJob, type HullSource } from '../jobs/job.js';
 import type { KeptAnswer } from '../answerCache.js';
@@ -73,23 +74,29 @@ async function answerOf(
     return inWorkerFor(ctx, req, forWorker());
   };
   if (bytes > ctx.limits.inlineBytes) return inWorker();
-  let hull: LoadedHull;
+  // The cost is judged on the hull as read, before it is prepared (fitting its sections is work too).
+  let model: HullModel;
+  let ready: () => LoadedHull;
   let params = job.params;
-  if (loaded !== undefined) hull = loaded();
-  else {
+  if (loaded !== undefined) {
+    const h = loaded();
+    model = h.hull;
+    ready = () => h;
+  } else {
     try {
       const input = readSource(c, job.source, job.params);
       params = input.params;
-      hull = loadHull(input.read);
+      model = input.read.hull;
+      ready = () => loadHull(input.read);
     } catch (e) {
       if (e instanceof HalfbreadthError && c.invalid !== undefined) return renderResult(c, c.invalid(e), job.format, job.filename);
       throw e;
     }
   }
-  const cost = c.cost(hull.hull, params);
+  const cost = c.cost(model, params);
   checkAnswerSize(c.name, cost, ctx.limits.maxAnswerCells);
   if (cost.work > ctx.limits.inlineWork) return inWorker(cost.work);
-  return computeAnswer(c, hull, params, job.format, job.filename);
+  return computeAnswer(c, ready(), params, job.format, job.filename);
 }
 
 function postRoute(c: AnyComputation): RouteSpec {
