@@ -12,7 +12,13 @@
  *   d. the stateless table: the offsets file in the body of every request, read each time
  *
  * Printed: requests/s, p50 and p99 latency, and whether the compute path meets its
- * targets (>= 1,000 req/s with p99 < 25 ms, and >= 40 % of the /healthz rate).
+ * targets (>= 1,000 req/s with p99 < 25 ms, and >= 80 % of its ideal rate).
+ *
+ * The ideal rate of the compute path is what one event loop could give if the route
+ * cost nothing beyond the bare route (/healthz) and the work itself: 1 / (1 / healthz
+ * rate + the in-process time of the same 20-draft table and its JSON text on the
+ * prepared hull), both measured in this run, so the machine's load of the moment
+ * affects both sides alike.
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, openSync, readFileSync, rmSync } from 'node:fs';
@@ -21,6 +27,11 @@ import { createServer } from 'node:net';
 import { cpus, loadavg, platform, release, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { performance } from 'node:perf_hooks';
+import { prepareHull } from '../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../core/offsets/readOffsets.js';
+import { hydrostaticResult } from '../core/report/formatHydrostatics.js';
+import { hydrostaticTable } from '../core/upright/hydrostatics.js';
 
 interface Histogram {
   average: number;
@@ -86,6 +97,24 @@ function drafts(shift: number): string {
   return Array.from({ length: 20 }, (_, k) => (0.2 + shift + 0.09 * k).toFixed(9)).join(',');
 }
 
+/** Median time, ms, of the 20-draft table of the demo workboat and its JSON text, in this process. */
+function inProcessTableMs(offsets: string): number {
+  const { hull } = readOffsetsCsv(offsets);
+  const prepared = prepareHull(hull);
+  const times: number[] = [];
+  let shift = 0;
+  for (let round = 0; round < 30; round++) {
+    const t0 = performance.now();
+    for (let k = 0; k < 100; k++) {
+      const d = drafts(++shift * 1e-9).split(',').map(Number);
+      JSON.stringify(hydrostaticResult(hull, 1.025, hydrostaticTable(prepared, d, 1.025)));
+    }
+    times.push((performance.now() - t0) / 100);
+  }
+  times.sort((a, b) => a - b);
+  return times[times.length >> 1]!;
+}
+
 /** A shift of the drafts that no request before has used (a nanometre more each time), so no answer can come from a cache. */
 let requestCount = 0;
 const freshShift = (): number => ++requestCount * 1e-9;
@@ -140,6 +169,7 @@ try {
     }),
   );
 
+  const tableMs = inProcessTableMs(offsets);
   const cpu = cpus()[0]?.model ?? 'unknown cpu';
   process.stdout.write(`Halfbreadth HTTP bench: ${platform()} ${release()}, ${cpus().length} x ${cpu}, Node ${process.version}, load ${loadavg().map((l) => l.toFixed(2)).join(' ')}\n`);
   process.stdout.write(`${CONNECTIONS} connections, ${SECONDS} s per scenario after ${WARMUP} s warm-up, service and load on ${HOST}\n\n`);
@@ -149,11 +179,13 @@ try {
   }
   const health = figures[0]!;
   const compute = figures[2]!;
-  const share = compute.rps / health.rps;
+  const ideal = 1 / (1 / health.rps + tableMs / 1000);
+  const share = compute.rps / ideal;
+  process.stdout.write(`\nin process: 20-draft table and its JSON text ${(tableMs * 1000).toFixed(0)} us; ideal compute-path rate ${ideal.toFixed(0)} req/s\n`);
   const checks = [
     [`compute path >= 1000 req/s`, compute.rps >= 1000],
     [`compute path p99 < 25 ms`, compute.p99 < 25],
-    [`compute path >= 40 % of /healthz (${(100 * share).toFixed(0)} %)`, share >= 0.4],
+    [`compute path >= 80 % of its ideal (${(100 * share).toFixed(0)} %)`, share >= 0.8],
     ['every answer 2xx', figures.every((f) => f.bad === 0)],
   ] as const;
   process.stdout.write('\n');

@@ -4,8 +4,10 @@
  * helpers every command shares: reading an input file or standard input, and choosing
  * the output format.
  */
-import { readFile } from 'node:fs/promises';
+import { createReadStream } from 'node:fs';
+import type { Readable } from 'node:stream';
 import { HalfbreadthError, issue } from '../core/common/errors.js';
+import { LIMITS } from '../core/common/limits.js';
 
 /** A stream the command line writes text to. */
 export interface TextSink {
@@ -24,19 +26,57 @@ export interface CliIo {
   readonly env: Readonly<Record<string, string | undefined>>;
 }
 
-/** The real process's streams, files and environment. */
+const tooLarge = (limit: number): HalfbreadthError =>
+  new HalfbreadthError([
+    issue('HYD_TOO_LARGE', ['file'], `the input is larger than ${limit / (1024 * 1024)} MiB, the limit of an offsets file (the service's body limit); is it the right file?`),
+  ]);
+
+/**
+ * All of a stream, but no more than `limit` bytes: past it the stream is closed and the
+ * read fails at once, so an endless input (`/dev/zero`, a runaway pipe) gets a clear
+ * error instead of filling the memory.
+ */
+export async function readBounded(stream: Readable, limit: number = LIMITS.maxInputBytes): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  let size = 0;
+  try {
+    for await (const chunk of stream) {
+      size += (chunk as Buffer).length;
+      if (size > limit) throw tooLarge(limit);
+      chunks.push(chunk as Buffer);
+    }
+  } finally {
+    stream.destroy();
+  }
+  return Buffer.concat(chunks);
+}
+
+/** The real process's streams, files and environment; inputs read in a bounded way. */
 export function processIo(): CliIo {
   return {
     stdout: process.stdout,
     stderr: process.stderr,
-    readStdin: async () => {
-      const chunks: Buffer[] = [];
-      for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
-      return Buffer.concat(chunks);
-    },
-    readFile: (path) => readFile(path),
+    readStdin: () => readBounded(process.stdin),
+    readFile: (path) => readBounded(createReadStream(path, { highWaterMark: 1024 * 1024 })),
     env: process.env,
   };
+}
+
+/**
+ * The one line the command line prints when it cannot write its output: the reader went
+ * away (EPIPE), the disk is full (ENOSPC), or another failure of the output stream.
+ */
+export function outputFault(e: unknown): string {
+  const code = (e as NodeJS.ErrnoException | undefined)?.code;
+  const why =
+    code === 'EPIPE'
+      ? 'the reader closed the output before all of it was written (EPIPE)'
+      : code === 'ENOSPC'
+        ? 'no space left on the device (ENOSPC)'
+        : code === 'EBADF'
+          ? 'standard output is closed (EBADF)'
+          : `${code ?? (e instanceof Error ? e.message : String(e))}`;
+  return `halfbreadth: cannot write the output: ${why}\n`;
 }
 
 /** An input once read: its text and the name to print before its issues. */
@@ -59,6 +99,7 @@ export async function readInput(arg: string, io: CliIo): Promise<Input> {
   try {
     bytes = arg === '-' ? await io.readStdin() : await io.readFile(arg);
   } catch (e) {
+    if (e instanceof HalfbreadthError) throw e;
     const code = (e as NodeJS.ErrnoException | undefined)?.code;
     if (typeof code !== 'string') throw e;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder, not a file' : code === 'EACCES' ? 'permission denied' : code;

@@ -34,8 +34,12 @@ Output: --format table|csv|json chooses the form and always wins. Without it, a
 command writes a table when stdout is a terminal and CSV when it is piped or
 redirected, so '> table.csv' gives a file a spreadsheet opens.
 
+Input is read up to 16 MiB. Numbers are plain decimals (1.25, 2e-1; no 0x).
+
 Exit status: 0 success; 2 bad input (every problem listed on stderr, with its
-line and column); 1 internal fault (HALFBREADTH_DEBUG=1 shows where).
+line and column, or its option); 1 output that could not be written (a full
+disk, a reader gone), said in one line, or an internal fault
+(HALFBREADTH_DEBUG=1 shows where).
 
 Every result carries a caution: its figures come from the offsets supplied and
 are for design and estimating. They do not replace an approved stability book;

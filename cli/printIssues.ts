@@ -10,7 +10,7 @@ import type { Issue } from '../core/common/errors.js';
 import { terminalSafe, type TextSink } from './io.js';
 
 /** Path roots that belong to a command-line option rather than to the input file. */
-const OPTION_ROOTS: Readonly<Record<string, string>> = { drafts: '--drafts', density: '--density' };
+const OPTION_ROOTS: Readonly<Record<string, string>> = { drafts: '--drafts', draft: '--draft', density: '--density' };
 
 /** What an issue is about, as printed before it. */
 export function issueSource(i: Issue, fileLabel: string | undefined, program: string): string {

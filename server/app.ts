@@ -9,10 +9,11 @@ import { buildOpenapi } from './openapi.js';
 import { OneLinePerRequest } from './plugins/requestLog.js';
 import { registerUploadBody } from './plugins/uploadBody.js';
 import { PreparedCache } from './preparedCache.js';
-import { frameworkProblem, registerProblemHandler } from './problem.js';
+import { ComputePool } from './jobs/computePool.js';
+import { clientErrorProblem, frameworkProblem, registerProblemHandler } from './problem.js';
 import { ALL_ROUTES } from './routes/index.js';
 import { registerRoutes } from './routes/routeSpec.js';
-import { SERVICE_LIMITS } from './serviceLimits.js';
+import { SERVICE_LIMITS, type ServiceLimits } from './serviceLimits.js';
 import { HullStore } from './store/hullStore.js';
 
 export interface AppOptions {
@@ -22,33 +23,47 @@ export interface AppOptions {
   readonly dataDir?: string;
   /** Fastify's logger option: false (the default) for none, or pino options. */
   readonly logger?: FastifyServerOptions['logger'];
+  /** Limits other than SERVICE_LIMITS (tests use small timeouts and thresholds). */
+  readonly limits?: Partial<ServiceLimits>;
 }
 
 declare module 'fastify' {
   interface FastifyInstance {
     /** The store and cache the routes use (for tests and for main.ts's demo preload). */
-    readonly halfbreadth: { readonly store: HullStore; readonly cache: PreparedCache };
+    readonly halfbreadth: { readonly store: HullStore; readonly cache: PreparedCache; readonly pool: ComputePool };
   }
 }
 
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
   const ownStore = options.store === undefined;
   const store = options.store ?? HullStore.open(options.dataDir ?? ':memory:');
+  const limits: ServiceLimits = { ...SERVICE_LIMITS, ...options.limits };
   const app = Fastify({
     logger: options.logger ?? false,
     logController: new OneLinePerRequest(),
-    bodyLimit: SERVICE_LIMITS.bodyLimit,
-    requestTimeout: SERVICE_LIMITS.requestTimeout,
-    connectionTimeout: SERVICE_LIMITS.connectionTimeout,
-    keepAliveTimeout: SERVICE_LIMITS.keepAliveTimeout,
+    // Counted while the body arrives: a body over it is cut off before it is parsed.
+    bodyLimit: limits.bodyLimit,
+    requestTimeout: limits.requestTimeout,
+    connectionTimeout: limits.connectionTimeout,
+    keepAliveTimeout: limits.keepAliveTimeout,
+    http: {
+      maxHeaderSize: limits.maxHeaderSize,
+      headersTimeout: limits.headersTimeout,
+      // Node looks for requests past their time only this often (30 s by default), so a
+      // 30 s request timeout could let a slow body run on for nearly a minute.
+      connectionsCheckingInterval: limits.timeoutCheckInterval,
+    },
+    // Node's own answers to malformed requests, slow ones and overlong headers, as problem documents.
+    clientErrorHandler: clientErrorProblem,
     routerOptions: { maxParamLength: 200 },
     // Closing stops idle keep-alive sockets at once and lets requests in flight finish.
     forceCloseConnections: 'idle',
     return503OnClosing: true,
     frameworkErrors: frameworkProblem,
   });
-  const cache = new PreparedCache(store, SERVICE_LIMITS.preparedCacheSize);
-  const ctx: ServiceContext = { store, cache, answers: new AnswerCache(SERVICE_LIMITS.answerCacheChars), openapi: buildOpenapi(ALL_ROUTES) };
+  const cache = new PreparedCache(store, limits.preparedCacheSize);
+  const pool = new ComputePool(limits);
+  const ctx: ServiceContext = { store, cache, answers: new AnswerCache(limits.answerCacheChars), pool, limits, openapi: buildOpenapi(ALL_ROUTES) };
 
   registerProblemHandler(app);
   registerUploadBody(app);
@@ -67,9 +82,10 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     return payload;
   });
   registerRoutes(app, ALL_ROUTES, ctx);
+  app.addHook('onClose', async () => pool.close());
   if (ownStore) app.addHook('onClose', async () => store.close());
 
-  app.decorate('halfbreadth', { store, cache });
+  app.decorate('halfbreadth', { store, cache, pool });
   await app.ready();
   return app;
 }

@@ -28,3 +28,22 @@ export function answerNotModified(req: FastifyRequest, reply: FastifyReply, etag
   reply.code(304).send();
   return true;
 }
+
+/** The tag of a stored hull as `GET /v1/hulls/{id}` gives it, in a unit and form. */
+export function hullTag(meta: { readonly hash: string; readonly name: string }, units: string, format: string): string {
+  return etagOf([meta.hash, meta.name, 'hull', units, format]);
+}
+
+/**
+ * `If-Match` on a write to a stored hull (RFC 9110, 13.1.1): the write goes ahead only
+ * when the header names the hull as it is now, by any tag a GET of it gives (the record
+ * in any unit and form, or the upload's), or is `*`. Comparison is strong: a weak tag
+ * never matches. True when there is no header (a plain write) or it matches.
+ */
+export function ifMatchHolds(req: FastifyRequest, current: readonly string[]): boolean {
+  const header = req.headers['if-match'];
+  if (header === undefined) return true;
+  if (header.trim() === '*') return true;
+  const tags = header.split(',').map((t) => t.trim());
+  return tags.some((t) => !t.startsWith('W/') && current.includes(t));
+}

@@ -6,14 +6,16 @@
  */
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { readDecimal } from '../core/common/decimal.js';
 import { buildApp } from './app.js';
 import { preloadDemo } from './preloadDemo.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
+import { bindWarning } from './bindWarning.js';
 import { startBanner } from './startBanner.js';
 
 function port(text: string | undefined): number {
   if (text === undefined || text === '') return 3000;
-  const n = Number(text);
+  const n = readDecimal(text);
   if (!Number.isInteger(n) || n < 0 || n > 65535) {
     process.stderr.write(`PORT must be an integer from 0 to 65535, not ${JSON.stringify(text)}\n`);
     process.exit(2);
@@ -69,7 +71,10 @@ process.on('SIGTERM', () => void stop('SIGTERM'));
 process.on('SIGINT', () => void stop('SIGINT'));
 
 try {
-  const address = await app.listen({ port: port(process.env.PORT), host: process.env.HOST ?? '127.0.0.1' });
+  const host = process.env.HOST ?? '127.0.0.1';
+  const address = await app.listen({ port: port(process.env.PORT), host });
+  const warning = bindWarning(host);
+  if (warning !== undefined) app.log.warn({ host }, warning);
   if (process.stderr.isTTY || process.env.HALFBREADTH_BANNER === '1') process.stderr.write(startBanner(app.halfbreadth.store, demoIds, address));
 } catch (e) {
   app.log.error({ err: e }, 'cannot listen');

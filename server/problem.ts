@@ -36,6 +36,8 @@ export const STATUS_OF_CODE: Readonly<Record<ProblemCode, number>> = {
   HYD_METADATA_PLACE: 422,
   HYD_PERPENDICULARS: 422,
   HYD_TOO_LARGE: 413,
+  HYD_VALUE_RANGE: 422,
+  HYD_NOT_IMMERSED: 422,
   HYD_ROW_LENGTH: 422,
   HYD_MODEL_INVALID: 422,
   HYD_DRAFT_LIST: 400,
@@ -49,6 +51,13 @@ export const STATUS_OF_CODE: Readonly<Record<ProblemCode, number>> = {
   HYD_HULL_NOT_FOUND: 404,
   HYD_ROUTE_NOT_FOUND: 404,
   HYD_METHOD_NOT_ALLOWED: 405,
+  HYD_ANSWER_TOO_LARGE: 422,
+  HYD_PRECONDITION_FAILED: 412,
+  HYD_BAD_REQUEST: 400,
+  HYD_REQUEST_TIMEOUT: 408,
+  HYD_HEADERS_TOO_LARGE: 431,
+  HYD_BUSY: 503,
+  HYD_COMPUTE_LIMIT: 503,
   HYD_INTERNAL: 500,
 };
 
@@ -136,6 +145,41 @@ function fromFastify(err: FastifyError): { code: ProblemCode; message: string } 
   if (status === 404) return { code: 'HYD_ROUTE_NOT_FOUND', message: err.message };
   if (status >= 400 && status < 500) return { code: 'HYD_BAD_ARGUMENT', message: err.message };
   return { code: 'HYD_INTERNAL', message: 'the service failed unexpectedly; the failure is logged' };
+}
+
+/**
+ * Node's own answers, before any route: a request that is not HTTP (400), one whose
+ * request line and headers are over maxHeaderSize (431), or one that did not arrive in
+ * time (408). Fastify's `clientErrorHandler`: the socket gets a problem document and is
+ * closed.
+ */
+export function clientErrorProblem(err: Error & { code?: string }, socket: import('node:net').Socket): void {
+  if (err.code === 'ECONNRESET' || socket.destroyed) return;
+  const [code, message]: [ProblemCode, string] =
+    err.code === 'ERR_HTTP_REQUEST_TIMEOUT'
+      ? ['HYD_REQUEST_TIMEOUT', 'the request line, headers and body did not all arrive within the time allowed (see README, Limits); the connection is closed']
+      : err.code === 'HPE_HEADER_OVERFLOW'
+        ? ['HYD_HEADERS_TOO_LARGE', `the request line and headers are longer than the limit (see README, Limits); a long drafts list can use ranges from:step:to`]
+        : ['HYD_BAD_REQUEST', 'the request is not well-formed HTTP/1.1'];
+  const status = STATUS_OF_CODE[code];
+  const doc: Problem = {
+    type: problemType(code),
+    title: problemTitle(code),
+    status,
+    detail: message,
+    instance: '',
+    requestId: '',
+    errors: [{ code, path: ['request'], message }],
+    caution: CAUTION,
+  };
+  const body = JSON.stringify(doc);
+  const reason = status === 408 ? 'Request Timeout' : status === 431 ? 'Request Header Fields Too Large' : 'Bad Request';
+  if (socket.writable) {
+    socket.write(
+      `HTTP/1.1 ${status} ${reason}\r\nContent-Type: ${PROBLEM_MEDIA_TYPE}\r\nContent-Length: ${Buffer.byteLength(body)}\r\nConnection: close\r\n\r\n${body}`,
+    );
+  }
+  socket.end();
 }
 
 /** Errors of Fastify's router (bad percent-encoding, an overlong path segment), which come before any route: Fastify's `frameworkErrors` option. */

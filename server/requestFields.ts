@@ -6,7 +6,9 @@
  */
 import { z } from 'zod';
 import { DENSITY_RANGE, SEA_WATER_DENSITY } from '../core/common/constants.js';
+import { readDecimal } from '../core/common/decimal.js';
 import { checkDensity } from '../core/common/density.js';
+import { NAME_PATTERN } from '../core/common/hullName.js';
 import { parseDraftList } from '../core/common/draftList.js';
 import { LIMITS } from '../core/common/limits.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
@@ -60,13 +62,8 @@ export const HeightsBody = z
   .optional()
   .describe(`extra heights, m, at most ${LIMITS.maxDrafts}; each must meet some station`);
 
-/**
- * A plain decimal number as typed (`1.3`, `.5`, `2e-1`), else NaN. Written so that a long
- * run of digits is read in one pass (no nested quantifiers to backtrack over).
- */
-export function decimalNumber(text: string): number {
-  return /^\s*[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?\s*$/.test(text) ? Number(text) : Number.NaN;
-}
+/** A plain decimal number as typed (`1.3`, `.5`, `2e-1`), else NaN: the one number syntax of core/common/decimal.ts. */
+export const decimalNumber = readDecimal;
 
 const DRAFT_HINT = 'give one draft in m above the baseline, e.g. 1.3';
 
@@ -136,6 +133,6 @@ export const NameField = z
   .trim()
   .min(1, { error: 'name is empty' })
   .max(LIMITS.maxNameLength, { error: `name is longer than ${LIMITS.maxNameLength} characters` })
-  .regex(/^[^\p{Cc}\p{Zl}\p{Zp}]*$/u, { error: 'name holds a control character or line break' })
+  .regex(NAME_PATTERN, { error: 'name holds a control character or line break (a tab, say); names are one line of printable text' })
   .optional()
   .describe(`a name for the hull (at most ${LIMITS.maxNameLength} characters); replaces the one in the offsets`);

@@ -15,6 +15,13 @@ export const SERVICE_CODES = {
   HYD_HULL_NOT_FOUND: 'No hull is stored under that id.',
   HYD_ROUTE_NOT_FOUND: 'No route answers that path.',
   HYD_METHOD_NOT_ALLOWED: 'The route does not answer that method.',
+  HYD_ANSWER_TOO_LARGE: `The answer would hold more than ${SERVICE_LIMITS.maxAnswerCells} numbers; ask for fewer drafts, heights or a smaller hull.`,
+  HYD_PRECONDITION_FAILED: 'The hull has changed since the version named in If-Match.',
+  HYD_BAD_REQUEST: 'The request is not well-formed HTTP.',
+  HYD_REQUEST_TIMEOUT: 'The request did not arrive in full within the time allowed.',
+  HYD_HEADERS_TOO_LARGE: `The request line and headers are longer than ${SERVICE_LIMITS.maxHeaderSize} bytes.`,
+  HYD_BUSY: 'Every worker thread is busy and the queue is full; retry after the time Retry-After gives.',
+  HYD_COMPUTE_LIMIT: 'The computation ran past its time or memory limit and was stopped.',
   HYD_INTERNAL: 'The service failed unexpectedly; the request may be retried.',
 } as const;
 
@@ -35,11 +42,11 @@ export class ServiceError extends Error {
   readonly issues: readonly ProblemIssue[];
   readonly headers: Readonly<Record<string, string>>;
 
-  constructor(code: ServiceCode, path: readonly (string | number)[], message: string, headers: Record<string, string> = {}) {
+  constructor(code: ServiceCode, path: readonly (string | number)[], message: string, headers: Record<string, string> = {}, issues?: readonly ProblemIssue[]) {
     super(message);
     this.name = 'ServiceError';
     this.code = code;
-    this.issues = [{ code, path, message }];
+    this.issues = issues ?? [{ code, path, message }];
     this.headers = headers;
   }
 }

@@ -8,6 +8,7 @@ import { areasCsv, areasResult, areasText } from '../../core/report/formatAreas.
 import { toJson } from '../../core/report/formatHydrostatics.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { requireImmersed } from '../../core/upright/formedRows.js';
 import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
@@ -58,7 +59,9 @@ Example:
     const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
     throwIfAny(issues);
     const { hull } = read!;
-    const result = areasResult(hull, sectionalAreaCurve(prepareHull(hull), draft!));
+    const curve = sectionalAreaCurve(prepareHull(hull), draft!);
+    requireImmersed(draft!, curve.volume);
+    const result = areasResult(hull, curve);
     io.stdout.write(format === 'json' ? toJson(result) + '\n' : format === 'csv' ? areasCsv(result) : terminalSafe(areasText(result)));
     return EXIT.ok;
   },

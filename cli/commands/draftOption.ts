@@ -1,12 +1,15 @@
 /**
- * The single `--draft <m>` of the commands that work at one waterline (sheet, areas),
- * read with the drafts-list rules of core/common/draftList.ts.
+ * The single `--draft <m>` of the commands that work at one waterline (sheet, areas):
+ * one plain decimal number of metres (core/common/decimal.ts), named as the option in
+ * every message.
  */
+import { readDecimal } from '../../core/common/decimal.js';
 import { fail } from '../../core/common/errors.js';
-import { parseDraftList } from '../../core/common/draftList.js';
 
 export function singleDraft(text: string | undefined): number {
-  const list = parseDraftList(text ?? '', ['draft']);
-  if (list.length !== 1) fail('HYD_BAD_ARGUMENT', ['draft'], `--draft takes one draft in metres, e.g. --draft 1.3; '${(text ?? '').slice(0, 40)}' gives ${list.length}`);
-  return list[0]!;
+  const value = readDecimal(text ?? '');
+  if (!Number.isFinite(value)) {
+    fail('HYD_DRAFT_LIST', ['--draft'], `--draft '${(text ?? '').slice(0, 40)}' is not one number of metres; give one draft above the baseline, e.g. --draft 1.3`);
+  }
+  return value;
 }

@@ -5,10 +5,12 @@
  */
 import { HalfbreadthError, issue, type Issue } from '../../core/common/errors.js';
 import { FRESH_WATER_DENSITY, SEA_WATER_DENSITY } from '../../core/common/constants.js';
+import { readDecimal } from '../../core/common/decimal.js';
 import { checkDensity } from '../../core/common/density.js';
 import { parseDraftList } from '../../core/common/draftList.js';
 import { hydrostaticResult, hydrostaticsCsv, hydrostaticsText, toJson } from '../../core/report/formatHydrostatics.js';
 import { errorEstimates } from '../../core/upright/errorEstimate.js';
+import { requireFormedRows } from '../../core/upright/formedRows.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import type { UnitSystem } from '../../core/report/hydrostaticsReport.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
@@ -28,8 +30,7 @@ export function densityOption(values: CommandArgs['values']): number {
     return FRESH_WATER_DENSITY;
   }
   if (text === undefined) return SEA_WATER_DENSITY;
-  const value = text.trim() === '' ? Number.NaN : Number(text);
-  return checkDensity(value, ['density'], text);
+  return checkDensity(readDecimal(text), ['density'], text);
 }
 
 /** The unit system of --units: si (the default) or imperial. */
@@ -116,12 +117,14 @@ Example:
       // Drafts are typed in feet when the table is asked for in imperial units.
       const metres = units === 'imperial' ? drafts!.map((d) => d * IMPERIAL_FACTORS.metresPerFoot) : drafts!;
       const rows = hydrostaticTable(prepared, metres, density!);
+      requireFormedRows(rows);
       const errorEstimate = values['error-estimate'] === true ? errorEstimates(prepared, metres, density!) : undefined;
       const report = hydrostaticsReport(hull, density!, rows, { units: units!, ...(errorEstimate === undefined ? {} : { errorEstimate }) });
       io.stdout.write(format === 'json' ? toJson(report) + '\n' : format === 'csv' ? reportCsv(report) : terminalSafe(reportText(report)));
       return EXIT.ok;
     }
     const rows = hydrostaticTable(prepared, drafts!, density!);
+    requireFormedRows(rows);
     const result = hydrostaticResult(hull, density!, rows);
     const text = format === 'json' ? toJson(result) + '\n' : format === 'csv' ? hydrostaticsCsv(result) : terminalSafe(hydrostaticsText(result));
     io.stdout.write(text);

@@ -5,6 +5,7 @@
  */
 import type { Issue } from '../../core/common/errors.js';
 import { calculationSheet } from '../../core/upright/calculationSheet.js';
+import { requireFormed } from '../../core/upright/formedRows.js';
 import { toJson } from '../../core/report/formatHydrostatics.js';
 import { sheetCsv, sheetResult, sheetText } from '../../core/report/formatSheet.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
@@ -71,7 +72,9 @@ Example:
     const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
     throwIfAny(issues);
     const { hull } = read!;
-    const result = sheetResult(hull, calculationSheet(prepareHull(hull), draft!, density!));
+    const sheet = calculationSheet(prepareHull(hull), draft!, density!);
+    requireFormed(draft!, sheet.results);
+    const result = sheetResult(hull, sheet);
     io.stdout.write(format === 'json' ? toJson(result) + '\n' : format === 'csv' ? sheetCsv(result) : terminalSafe(sheetText(result)));
     return EXIT.ok;
   },

@@ -1,7 +1,9 @@
 /**
  * Drafts lists as people type them: comma-separated values and inclusive ranges
- * `from:step:to`, e.g. `0.2:0.1:1.2,1.25`. Values are metres.
+ * `from:step:to`, e.g. `0.2:0.1:1.2,1.25`. Values are metres, each a plain decimal
+ * (core/common/decimal.ts: no hexadecimal or binary).
  */
+import { readDecimal } from './decimal.js';
 import { fail } from './errors.js';
 import { LIMITS } from './limits.js';
 
@@ -15,8 +17,8 @@ export function parseDraftList(text: string, path: readonly (string | number)[] 
   parts.forEach((part, k) => {
     const where = `drafts item ${k + 1} "${part.slice(0, 40)}"`;
     const bits = part.split(':');
-    const nums = bits.map((b) => (b.trim() === '' ? Number.NaN : Number(b)));
-    if (nums.some((v) => !Number.isFinite(v))) fail('HYD_DRAFT_LIST', [...path, k], `${where}: not a number or a range from:step:to`);
+    const nums = bits.map(readDecimal);
+    if (nums.some((v) => !Number.isFinite(v))) fail('HYD_DRAFT_LIST', [...path, k], `${where}: not a number or a range from:step:to (numbers are plain decimals such as 1.25 or 2e-1)`);
     if (bits.length === 1) {
       out.push(nums[0]!);
     } else if (bits.length === 3) {

@@ -32,6 +32,8 @@ export const ERROR_CODES = {
   HYD_METADATA_PLACE: 'A metadata line lies after the header row, where it would not be read.',
   HYD_PERPENDICULARS: 'The perpendiculars are not in order (fp must lie forward of ap).',
   HYD_TOO_LARGE: 'The input is larger than the documented limits.',
+  HYD_VALUE_RANGE: 'A length or other number lies outside its documented physical range.',
+  HYD_NOT_IMMERSED: 'At a draft the hull has no immersed volume or no waterplane, so its figures cannot be formed.',
   HYD_ROW_LENGTH: 'A row has more cells than the header.',
   HYD_MODEL_INVALID: 'A JSON hull model does not match the schema.',
   HYD_DRAFT_LIST: 'A drafts list is malformed, empty or too long.',

@@ -16,6 +16,9 @@ const NINE = 57;
 /** Sixteenths of an inch in a foot. */
 const SIXTEENTHS_PER_FOOT = 12 * 16;
 
+/** The end of the message for feet too many to be a number at all. */
+export const FEET_TOO_LARGE = 'has too many feet to be a finite number';
+
 const shape = (t: string): string =>
   `'${t}' is not feet-inches-eighths: write feet-inches-eighths with dashes, e.g. 3-4-5 for 3 ft 4 5/8 in, 3-4-5+ for 3 ft 4 11/16 in`;
 
@@ -58,6 +61,8 @@ export function scanFeetInches(text: string): number | string {
   if (eighths > 7) return `'${t}': eighths ${eighths} must be 0 to 7`;
   const sixteenths = feet * SIXTEENTHS_PER_FOOT + inches * 16 + eighths * 2 + (plus ? 1 : 0);
   const value = sixteenths / SIXTEENTHS_PER_FOOT;
+  // 309 or more digits of feet overflow a double: an error, never an infinite length.
+  if (!Number.isFinite(value)) return `'${t.slice(0, 24)}...' ${FEET_TOO_LARGE}`;
   return negative ? -value : value;
 }
 

@@ -150,28 +150,99 @@ function predict(s: readonly number[], v: readonly number[], k: number, degree: 
   return { value, gain: Math.sqrt(1 + sq), roughness };
 }
 
-/** The offsets of one curve found unfair, in the order found, with their suggested values. */
+/**
+ * A max-heap of places by unfairness ratio (the smaller index first on a tie), with
+ * stale entries skipped on the way out: the worst place of a line is found in
+ * O(log n), not by a scan of the whole line every round.
+ */
+class WorstFirst {
+  private readonly ratio: number[] = [];
+  private readonly index: number[] = [];
+
+  private before(a: number, b: number): boolean {
+    const ra = this.ratio[a]!;
+    const rb = this.ratio[b]!;
+    return ra > rb || (ra === rb && this.index[a]! < this.index[b]!);
+  }
+
+  private swap(a: number, b: number): void {
+    [this.ratio[a], this.ratio[b]] = [this.ratio[b]!, this.ratio[a]!];
+    [this.index[a], this.index[b]] = [this.index[b]!, this.index[a]!];
+  }
+
+  push(index: number, ratio: number): void {
+    this.ratio.push(ratio);
+    this.index.push(index);
+    for (let i = this.ratio.length - 1; i > 0; ) {
+      const up = (i - 1) >> 1;
+      if (!this.before(i, up)) break;
+      this.swap(i, up);
+      i = up;
+    }
+  }
+
+  /** The top entry, or undefined when empty; removed. */
+  pop(): { index: number; ratio: number } | undefined {
+    const n = this.ratio.length;
+    if (n === 0) return undefined;
+    const top = { index: this.index[0]!, ratio: this.ratio[0]! };
+    this.swap(0, n - 1);
+    this.ratio.pop();
+    this.index.pop();
+    for (let i = 0; ; ) {
+      const l = 2 * i + 1;
+      const r = l + 1;
+      let m = i;
+      if (l < n - 1 && this.before(l, m)) m = l;
+      if (r < n - 1 && this.before(r, m)) m = r;
+      if (m === i) break;
+      this.swap(i, m);
+      i = m;
+    }
+    return top;
+  }
+}
+
+/**
+ * The offsets of one curve found unfair, in the order found, with their suggested values.
+ *
+ * Cost: O(n log n) in the offsets of the line. A correction changes the predictions
+ * only within `degree + 3` places of it (the predictor's reach and that of its error
+ * term), so only those are computed again; the worst place is taken from a heap; and a
+ * place let pass is looked at again only when a correction lands near enough to change
+ * what it was judged on.
+ */
 function checkCurve(curve: Curve, size: number): { found: { index: number; value: number; suggested: number; ratio: number }[]; first: number[] } {
   const { s } = curve;
   const v = curve.v.slice();
   const n = s.length;
   const degree = Math.min(3, n - 3);
   if (degree < 1) return { found: [], first: [] };
-  let first: number[] = [];
   const found: { index: number; value: number; suggested: number; ratio: number }[] = [];
   const tolerance = (p: Prediction): number => p.gain * FAIRNESS_TOLERANCE.sizeFraction * size + FAIRNESS_TOLERANCE.differenceFraction * p.roughness;
   const ratioAt = (values: readonly number[], k: number, p = predict(s, values, k, degree)): number => Math.abs(values[k]! - p.value) / tolerance(p);
   // An offset's predictor reaches at most degree + 1 places either side: only there can a change show.
   const reach = degree + 1;
+  // A value reaches the prediction and error term of places this far away.
+  const depends = degree + 3;
+  // What judging a worst place reads: the ratios of its window, with trials near it.
+  const judgedOn = 3 * reach + depends;
   const judged = (k: number): boolean => k > 0 && k < n - 1;
+  const pred = s.map((_s, k) => predict(s, v, k, degree));
+  const ratio = pred.map((p, k) => ratioAt(v, k, p));
+  const first = ratio.map((r, k) => (judged(k) ? r : Number.NaN));
   const passed = new Set<number>(); // unfair-looking places that no single offset explains
+  const heap = new WorstFirst();
+  const offer = (k: number): void => {
+    if (judged(k) && ratio[k]! > 1 && !passed.has(k)) heap.push(k, ratio[k]!);
+  };
+  for (let k = 0; k < n; k++) offer(k);
   for (let round = 0; round < 2 * n; round++) {
-    const pred = s.map((_s, k) => predict(s, v, k, degree));
-    const ratio = pred.map((p, k) => ratioAt(v, k, p));
-    if (round === 0) first = ratio.map((r, k) => (judged(k) ? r : Number.NaN));
-    let worst = -1;
-    for (let k = 0; k < n; k++) if (judged(k) && !passed.has(k) && ratio[k]! > 1 && (worst < 0 || ratio[k]! > ratio[worst]!)) worst = k;
-    if (worst < 0) break;
+    let top = heap.pop();
+    // Skip entries made stale by a correction or a pass since they went in.
+    while (top !== undefined && (top.ratio !== ratio[top.index] || passed.has(top.index) || !(ratio[top.index]! > 1))) top = heap.pop();
+    if (top === undefined) break;
+    const worst = top.index;
     // Every candidate is scored over the same window, so the scores compare.
     const from = Math.max(1, worst - 3 * reach);
     const to = Math.min(n - 2, worst + 3 * reach);
@@ -181,10 +252,12 @@ function checkCurve(curve: Curve, size: number): { found: { index: number; value
     let bestScore = Number.POSITIVE_INFINITY;
     for (let c = Math.max(0, worst - reach); c <= Math.min(n - 1, worst + reach); c++) {
       if (!judged(c) || !(ratio[c]! > 1)) continue;
-      const trial = v.slice();
-      trial[c] = pred[c]!.value;
+      // The trial correction in place, undone after: no copy of the line per candidate.
+      const kept = v[c]!;
+      v[c] = pred[c]!.value;
       let score = 0;
-      for (let k = from; k <= to; k++) score += ratioAt(trial, k) ** 2;
+      for (let k = from; k <= to; k++) score += ratioAt(v, k) ** 2;
+      v[c] = kept;
       if (score < bestScore) {
         bestScore = score;
         best = c;
@@ -198,7 +271,15 @@ function checkCurve(curve: Curve, size: number): { found: { index: number; value
     }
     found.push({ index: best, value: curve.v[best]!, suggested: pred[best]!.value, ratio: ratio[best]! });
     v[best] = pred[best]!.value;
-    passed.clear();
+    for (let k = Math.max(0, best - depends); k <= Math.min(n - 1, best + depends); k++) {
+      pred[k] = predict(s, v, k, degree);
+      ratio[k] = ratioAt(v, k, pred[k]);
+    }
+    // Places let pass near the correction are judged again; those further away were judged on what has not changed.
+    for (let k = Math.max(0, best - judgedOn); k <= Math.min(n - 1, best + judgedOn); k++) {
+      passed.delete(k);
+      offer(k);
+    }
   }
   return { found, first };
 }
@@ -294,7 +375,8 @@ function lineCurves(hull: HullModel): Curve[] {
   return curves;
 }
 
-const fmt = (v: number): string => String(Math.round(v * 1e4) / 1e4);
+// Four decimals of a metre; a value too large to round so (none within the physical limits) is written as it is.
+const fmt = (v: number): string => (Math.abs(v) < 1e12 ? String(Math.round(v * 1e4) / 1e4) : v.toPrecision(6));
 
 /**
  * Every unfair offset of a hull, one warning per offset, in station and point order.

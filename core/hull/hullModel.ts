@@ -8,6 +8,7 @@
  * knuckles but the first and last points; `waterlines` then keeps the table's header.
  */
 import { z } from 'zod';
+import { NAME_PATTERN } from '../common/hullName.js';
 import { LIMITS } from '../common/limits.js';
 import { checkHull } from './hullRules.js';
 
@@ -28,7 +29,11 @@ export const StationSchema = z
 
 const HullFields = z
   .object({
-    name: z.string().max(LIMITS.maxNameLength).default('unnamed hull'),
+    name: z
+      .string()
+      .max(LIMITS.maxNameLength)
+      .regex(NAME_PATTERN, { error: 'the name holds a control character or line break; names are one line of printable text' })
+      .default('unnamed hull'),
     ap: z.number().optional().describe('x of the aft perpendicular, m (default: aftmost station)'),
     fp: z.number().optional().describe('x of the forward perpendicular, m (default: foremost station)'),
     waterlines: z

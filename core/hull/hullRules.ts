@@ -4,7 +4,7 @@
  * reader translates them to lines and columns.
  */
 import { issue, type Issue } from '../common/errors.js';
-import { LIMITS } from '../common/limits.js';
+import { LIMITS, lengthInRange, PHYSICAL_LIMITS } from '../common/limits.js';
 
 interface RuleHull {
   readonly ap?: number | undefined;
@@ -15,8 +15,46 @@ interface RuleHull {
 
 const fmt = (v: number): string => (Number.isFinite(v) ? String(Math.round(v * 1e6) / 1e6) : String(v));
 
+const RANGE = `lengths must lie within ${PHYSICAL_LIMITS.maxLength} m of the origin`;
+
+/**
+ * Lengths beyond the physical limits (core/common/limits.ts), each reported once: a
+ * length more than 10 km from the origin, or neighbouring stations or waterlines closer
+ * than 1 mm. Checked before the other rules, which compare lengths and would only repeat
+ * the fault. Messages read `<what> <value> m: <rule>`; the CSV reader keeps the rule.
+ */
+function outOfRange(hull: RuleHull): Issue[] {
+  const found: Issue[] = [];
+  const check = (v: number, path: (string | number)[], what: string): void => {
+    if (!lengthInRange(v)) found.push(issue('HYD_VALUE_RANGE', path, `${what} ${fmt(v)} m: beyond the physical limit; ${RANGE}`));
+  };
+  const gap = (v: number, before: number | undefined, path: (string | number)[], what: string, things: string): void => {
+    const d = before === undefined ? Number.NaN : v - before;
+    if (d > 0 && d < PHYSICAL_LIMITS.minSpacing) {
+      found.push(issue('HYD_VALUE_RANGE', path, `${what} ${fmt(v)} m: ${d.toPrecision(3)} m above the one before it; ${things} must be at least ${PHYSICAL_LIMITS.minSpacing} m apart`));
+    }
+  };
+  if (hull.ap !== undefined) check(hull.ap, ['ap'], 'ap');
+  if (hull.fp !== undefined) check(hull.fp, ['fp'], 'fp');
+  hull.waterlines?.forEach((z, k) => {
+    check(z, ['waterlines', k], `waterline ${k + 1} at z =`);
+    gap(z, hull.waterlines![k - 1], ['waterlines', k], `waterline ${k + 1} at z =`, 'waterlines');
+  });
+  hull.stations.forEach((st, i) => {
+    check(st.x, ['stations', i, 'x'], `station ${i + 1} at x =`);
+    gap(st.x, hull.stations[i - 1]?.x, ['stations', i, 'x'], `station ${i + 1} at x =`, 'stations');
+    st.points.forEach((p, j) => {
+      check(p.y, ['stations', i, 'points', j, 'y'], `station ${i + 1}, point ${j + 1}: half-breadth`);
+      check(p.z, ['stations', i, 'points', j, 'z'], `station ${i + 1}, point ${j + 1}: z =`);
+    });
+  });
+  return found;
+}
+
 /** Every rule broken by the hull, in file order; an empty list means the hull is sound. */
 export function checkHull(hull: RuleHull): Issue[] {
+  const range = outOfRange(hull);
+  if (range.length > 0) return range;
   const found: Issue[] = [];
   const { stations } = hull;
   if (stations.length < 3) {

@@ -10,7 +10,7 @@
  * without it, in the wrong units perhaps.
  */
 import type { Issue } from '../common/errors.js';
-import { LIMITS } from '../common/limits.js';
+import { nameProblem } from '../common/hullName.js';
 import { csvIssue } from './offsetsIssue.js';
 import { readLength } from './lengthCell.js';
 import { isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../common/units.js';
@@ -88,9 +88,9 @@ export function readMetadata(comments: readonly CommentLine[]): Metadata {
   let name: string | undefined;
   const n = given.get('name');
   if (n !== undefined) {
-    if (n.value.length > LIMITS.maxNameLength) {
-      issues.push(csvIssue('HYD_METADATA_VALUE', n.line, undefined, undefined, `name is ${n.value.length} characters long; the limit is ${LIMITS.maxNameLength}`));
-    } else name = n.value;
+    const problem = nameProblem(n.value);
+    if (problem !== undefined) issues.push(csvIssue('HYD_METADATA_VALUE', n.line, undefined, undefined, `name ${problem}`));
+    else name = n.value;
   }
 
   let perpendicularFault = false;

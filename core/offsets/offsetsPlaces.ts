@@ -65,7 +65,7 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
   const spotOf = (path: readonly (string | number)[]): Spot => {
     const [head, i, sub, j, field] = path;
     if (head === 'waterlines' && typeof i === 'number') return waterlineSpot(i);
-    if (head === 'ap' || head === 'fp') return { line: meta[head]?.line };
+    if (head === 'ap' || head === 'fp') return { line: meta[head]?.line, text: meta[head] === undefined ? undefined : `${head} ${meta[head].text}` };
     if (head !== 'stations' || typeof i !== 'number' || i >= map.stationRow.length) return {};
     if (sub === 'x') return xSpot(i);
     if (sub === 'points' && typeof j === 'number') return pointSpot(i, j, field === 'y' || field === 'z' ? field : undefined);
@@ -83,6 +83,11 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
     switch (f.code) {
       case 'HYD_HALF_BREADTH_NEGATIVE':
         put(f, s, `half-breadth ${s.text} < 0`);
+        break;
+      case 'HYD_VALUE_RANGE':
+        // In the grid form every point's z is a header height, whose own issue stands for it.
+        if (grid && f.path[0] === 'stations' && f.path[4] === 'z') break;
+        put(f, s, `${s.text}${label}: ${f.message.slice(f.message.indexOf(' m: ') + 4)}`);
         break;
       case 'HYD_X_NOT_INCREASING': {
         const p = typeof i === 'number' && i > 0 ? xSpot(i - 1) : {};

@@ -106,6 +106,16 @@ function parseCells(texts: readonly string[], lines: readonly number[]): { rows:
   return { rows: parsed.data, issues };
 }
 
+/** Cells after the first of each line that hold more than spaces: a grid's defined half-breadths, by a plain split. */
+function definedCells(body: readonly string[]): number {
+  let n = 0;
+  for (const line of body) {
+    const cells = line.split(',');
+    for (let c = 1; c < cells.length; c++) if (cells[c]!.trim() !== '') n++;
+  }
+  return n;
+}
+
 const isWord = (s: string): boolean => {
   if (s.length === 0) return false;
   for (let i = 0; i < s.length; i++) {
@@ -172,6 +182,16 @@ export function readOffsetsCsv(text: string): ReadResult {
     if (lines.body.length > LIMITS.maxStations) {
       issues.push(csvIssue('HYD_TOO_LARGE', undefined, undefined, undefined, `the file has ${lines.body.length} station rows; the limit is ${LIMITS.maxStations}`));
       fail(issues);
+    }
+    // A grid whose defined cells are over the points limit is refused before its cells
+    // are parsed (which takes seconds for the largest bodies): counted by commas, which
+    // is exact for a grid of numbers and an over-count only where a quoted cell holds one.
+    if (lines.body.length * (header.length - 1) > LIMITS.maxPoints) {
+      const defined = definedCells(lines.body);
+      if (defined > LIMITS.maxPoints) {
+        issues.push(csvIssue('HYD_TOO_LARGE', undefined, undefined, undefined, `the file has about ${defined} half-breadths; the limit is ${LIMITS.maxPoints} points`));
+        fail(issues);
+      }
     }
     waterlines = gh.waterlines;
     readBody = (sheet) => readGridBody(sheet, gh);

@@ -14,6 +14,7 @@
  */
 import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
+import { csvSafeText } from '../common/csvSafe.js';
 import { fail } from '../common/errors.js';
 import { formatFeetInches } from '../common/feetInches.js';
 import type { HullModel } from '../hull/hullModel.js';
@@ -27,12 +28,13 @@ export interface WriteOptions {
   readonly form?: OffsetsForm;
 }
 
-/** Control characters and line or paragraph separators, which would break a comment line. */
-const BREAKS = /[\p{Cc}\p{Zl}\p{Zp}]/gu;
-
-/** The name as a metadata line holds it: control characters and line breaks become spaces, ends trimmed. */
-export function nameForFile(name: string): string {
-  return name.replace(BREAKS, ' ').trim();
+/**
+ * The metadata line of the name, written by csvSafeText (core/common/csvSafe.ts) like
+ * every text cell: control characters and line breaks become spaces, and a part a
+ * spreadsheet splitting the line could read as a formula (`a,=1+2`) gets an apostrophe.
+ */
+export function nameLine(name: string): string {
+  return csvSafeText(`# name: ${name.trim()}`).trimEnd();
 }
 
 /**
@@ -74,7 +76,7 @@ export function writeOffsetsCsv(hull: HullModel, options: WriteOptions = {}): st
     fail('HYD_BAD_ARGUMENT', ['form'], `the hull cannot be written as a grid: ${starts}`);
   }
 
-  const head = [`# ${CAUTION}`, `# name: ${nameForFile(hull.name)}`, `# units: ${units}`];
+  const head = [`# ${CAUTION}`, nameLine(hull.name), `# units: ${units}`];
   if (hull.ap !== undefined) head.push(`# ap: ${len(hull.ap)}`);
   if (hull.fp !== undefined) head.push(`# fp: ${len(hull.fp)}`);
 

@@ -6,7 +6,6 @@
  */
 import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
-import { csvSafeText } from '../common/csvSafe.js';
 import { csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import type { HullModel } from '../hull/hullModel.js';
 import type { SectionalAreaCurve } from '../upright/sectionalAreaCurve.js';
@@ -33,7 +32,7 @@ function summaryLines(r: AreasResult): string[] {
 
 export function areasCsv(r: AreasResult): string {
   const data = r.stations.map((s) => [s.x, s.area, Number.isFinite(s.fraction) ? s.fraction : '']);
-  const preamble = csvPreamble([`hull: ${csvSafeText(r.hull.name)}`, 'sectional areas (both sides) against x', ...summaryLines(r)]);
+  const preamble = csvPreamble([`hull: ${r.hull.name}`, 'sectional areas (both sides) against x', ...summaryLines(r)]);
   return preamble + Papa.unparse({ fields: ['x_m', 'area_m2', 'fraction_of_am'], data }, { newline: '\r\n' }) + '\r\n';
 }
 

@@ -7,7 +7,6 @@
 import Papa from 'papaparse';
 import type { BonjeanStation } from '../upright/bonjean.js';
 import { CAUTION } from '../common/caution.js';
-import { csvSafeText } from '../common/csvSafe.js';
 import { csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import type { HullModel } from '../hull/hullModel.js';
 
@@ -23,7 +22,7 @@ export function bonjeanResult(hull: HullModel, stations: readonly BonjeanStation
 
 export function bonjeanCsv(r: BonjeanResult): string {
   const data = r.stations.flatMap((s) => s.points.map((q) => [s.x, q.z, q.area, q.momentZ]));
-  const preamble = csvPreamble([`hull: ${csvSafeText(r.hull.name)}`, 'Bonjean data: immersed area of each station (both sides) and its moment about the baseline']);
+  const preamble = csvPreamble([`hull: ${r.hull.name}`, 'Bonjean data: immersed area of each station (both sides) and its moment about the baseline']);
   return preamble + Papa.unparse({ fields: ['x_m', 'z_m', 'area_m2', 'momentZ_m3'], data }, { newline: '\r\n' }) + '\r\n';
 }
 

@@ -61,7 +61,8 @@ export function toJson(value: unknown): string {
  * phrases stays.
  */
 export function csvPreamble(lines: readonly string[]): string {
-  const tidy = (l: string): string => l.replace(/[\r\n,]+/g, ' ').replace(/[;\t][;\t\s]*(?=[=+\-@])/g, ' ');
+  // Commas go, so a line stays one cell for a reader that splits on them; csvSafeText makes it safe for the others.
+  const tidy = (l: string): string => csvSafeText(l.replace(/,+/g, ' '));
   return [`# ${CAUTION}`, ...lines.map((l) => `# ${tidy(l)}`)].join('\r\n') + '\r\n';
 }
 
@@ -69,7 +70,7 @@ export function csvPreamble(lines: readonly string[]): string {
 export function hydrostaticsCsv(result: HydrostaticResult): string {
   const header = HYDROSTATIC_FIELDS.map((f) => csvHeader(f.key, f.unit));
   const data = result.rows.map((r) => HYDROSTATIC_FIELDS.map((f) => (Number.isFinite(r[f.key]) ? r[f.key] : '')));
-  const preamble = csvPreamble([`hull: ${csvSafeText(result.hull.name)}`, `density: ${result.density} t/m3`, ...result.notes]);
+  const preamble = csvPreamble([`hull: ${result.hull.name}`, `density: ${result.density} t/m3`, ...result.notes]);
   return preamble + Papa.unparse({ fields: header, data }, { newline: '\r\n' }) + '\r\n';
 }
 

@@ -8,7 +8,6 @@
 import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
 import type { CalculationSheet, SheetResults, SheetStation, SheetTotals } from '../upright/calculationSheet.js';
-import { csvSafeText } from '../common/csvSafe.js';
 import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import type { HullModel } from '../hull/hullModel.js';
 import { multiplierText } from './multiplierText.js';
@@ -126,7 +125,7 @@ export function sheetCsv(r: SheetResult): string {
   const data: (string | number)[][] = r.stations.map((s) => SHEET_COLUMNS.map((c) => s[c.key]));
   data.push(SHEET_COLUMNS.map((c, k) => (k === 0 ? 'sum' : c.key in r.totals ? r.totals[c.key as keyof SheetTotals] : '')));
   const preamble = csvPreamble([
-    `hull: ${csvSafeText(r.hull.name)}`,
+    `hull: ${r.hull.name}`,
     `draft: ${r.draft} m; density: ${r.density} t/m3`,
     `h = ${num(r.spacing)} m (the most common station interval); h/3 = ${num(r.commonFactor)} m; amidships = ${num(r.amidships)} m (levers are x - amidships)`,
     ...pieceLines(r),

@@ -7,7 +7,6 @@
  */
 import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
-import { csvSafeText } from '../common/csvSafe.js';
 import { ERROR_ESTIMATE_FIELDS, type ErrorEstimates, type Halving } from '../upright/errorEstimate.js';
 import { csvHeader, csvPreamble, hullSummary, type HullSummary } from './formatHydrostatics.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from '../upright/hydrostaticFields.js';
@@ -119,7 +118,7 @@ const header = (c: ReportField): string => (IMPERIAL_SLUG[c.unit] !== undefined 
 function preambleLines(r: HydrostaticsReport): string[] {
   const u = r.units === 'si' ? 'm' : 'ft';
   const lines = [
-    `hull: ${csvSafeText(r.hull.name)}; LBP ${Number(r.hull.lbp.toPrecision(10))} ${u}`,
+    `hull: ${r.hull.name}; LBP ${Number(r.hull.lbp.toPrecision(10))} ${u}`,
     r.units === 'si'
       ? `density: ${r.density} t/m3`
       : `density: ${r.density} t/m3 (${Number(cubicFeetPerLongTon(r.density).toPrecision(6))} ft3 per long ton); units: feet and long tons (1 ft = 0.3048 m; 1 long ton = 1016.0469088 kg)`,

@@ -38,9 +38,13 @@ export type HydrostaticRow = Record<HydrostaticField, number>;
 
 export const HydrostaticRowSchema = z
   .object(
-    Object.fromEntries(HYDROSTATIC_FIELDS.map((f) => [f.key, z.number().nullable().describe(`${f.description} (${f.unit})`)])) as Record<
-      HydrostaticField,
-      z.ZodNullable<z.ZodNumber>
-    >,
+    // Only a form coefficient may be null (its denominator zero); a draft where the other
+    // figures cannot be formed is an error naming it (core/upright/formedRows.ts).
+    Object.fromEntries(
+      HYDROSTATIC_FIELDS.map((f) => {
+        const n = z.number();
+        return [f.key, (f.unit === '-' ? n.nullable() : n).describe(`${f.description} (${f.unit})${f.unit === '-' ? '; null where its denominator is zero' : ''}`)];
+      }),
+    ) as Record<HydrostaticField, z.ZodNullable<z.ZodNumber>>,
   )
   .describe('hydrostatic particulars at one draft, upright and level');

@@ -2,6 +2,7 @@
 export * from './bonjean.js';
 export * from './calculationSheet.js';
 export * from './errorEstimate.js';
+export * from './formedRows.js';
 export * from './hydrostaticFields.js';
 export * from './hydrostatics.js';
 export * from './particulars.js';

@@ -10,6 +10,8 @@ import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
+import { prepareWork } from './cost.js';
+import { requireImmersed } from '../../core/upright/formedRows.js';
 
 export const AreasResultSchema = z
   .object({
@@ -24,7 +26,7 @@ export const AreasResultSchema = z
       }),
     ),
     volume: z.number().describe('area under the curve: the displaced volume, m3'),
-    lcb: z.number().nullable().describe('x of the centroid of the area under the curve: the LCB, m'),
+    lcb: z.number().describe('x of the centroid of the area under the curve: the LCB, m'),
     am: z.number().describe('immersed area at amidships, m2'),
     amidships: z.number().describe('x of amidships, (ap + fp) / 2, m'),
     lwl: z.number().describe('length of the waterplane, m'),
@@ -46,6 +48,11 @@ export const areas: Computation<Params, AreasResult> = {
   body: z.object({ draft: DraftBody }),
   result: AreasResultSchema,
   key: (p) => `draft=${p.draft}`,
-  run: (h, p) => areasResult(h.hull, sectionalAreaCurve(h.prepared, p.draft)),
+  cost: (hull) => ({ cells: 3 * hull.stations.length + 10, work: prepareWork(hull) + hull.stations.length }),
+  run: (h, p) => {
+    const curve = sectionalAreaCurve(h.prepared, p.draft);
+    requireImmersed(p.draft, curve.volume);
+    return areasResult(h.hull, curve);
+  },
   csv: areasCsv,
 };

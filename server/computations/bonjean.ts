@@ -9,6 +9,7 @@ import { bonjeanCsv, bonjeanResult, type BonjeanResult } from '../../core/report
 import { HeightsBody, HeightsQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
+import { pointsOf, prepareWork } from './cost.js';
 
 const BonjeanStationSchema = z.object({
   x: z.number().describe('station position, m'),
@@ -42,6 +43,11 @@ export const bonjean: Computation<Params, BonjeanResult> = {
   body: z.object({ drafts: HeightsBody }),
   result: BonjeanResultSchema,
   key: (p) => `drafts=${(p.drafts ?? []).join(',')}`,
+  // Per station: its keel, deck edge and every point height, and each extra height: three numbers each.
+  cost: (hull, p) => {
+    const cells = 3 * (pointsOf(hull) + hull.stations.length * (3 + (p.drafts?.length ?? 0)));
+    return { cells, work: prepareWork(hull) + cells };
+  },
   run: (h, p) => bonjeanResult(h.hull, bonjeanData(h.prepared, p.drafts ?? [])),
   csv: bonjeanCsv,
 };

@@ -13,6 +13,10 @@ import { hullSummary, type HullSummary } from '../../core/report/formatHydrostat
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
 import type { Computation } from './computation.js';
+import { pointsOf, prepareWork } from './cost.js';
+
+/** Work units of the fairness check per offset: about 3 s for a million offsets (bench/core.bench.ts). */
+const FAIRNESS_WORK_PER_POINT = 50;
 
 const ParticularsSchema = z.object({
   form: HullFormSchema,
@@ -87,6 +91,9 @@ export const check: Computation<Record<string, never>, CheckResult> = {
   body: z.object({}),
   result: CheckResultSchema,
   key: () => '',
+  usesNotes: true,
+  // At most one warning per offset (a fair table has none; an unfair one a few per line).
+  cost: (hull) => ({ cells: pointsOf(hull), work: prepareWork(hull) + FAIRNESS_WORK_PER_POINT * pointsOf(hull) }),
   run: (h) => ({
     valid: true,
     hull: hullSummary(h.hull),

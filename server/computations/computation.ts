@@ -7,7 +7,8 @@
  */
 import { z } from 'zod';
 import type { HalfbreadthError } from '../../core/common/errors.js';
-import { HullModelSchema } from '../../core/hull/hullModel.js';
+import { HullModelSchema, type HullModel } from '../../core/hull/hullModel.js';
+import type { Cost } from './cost.js';
 import type { LoadedHull } from '../hullInput.js';
 import { FormatQuery, type Format } from '../requestFields.js';
 
@@ -24,11 +25,20 @@ export interface Computation<P, R> {
   readonly result: z.ZodType;
   /** The parameters in one canonical text, for the ETag. */
   key(params: P): string;
+  /**
+   * What the answer costs, from the hull and the parameters, before anything is
+   * computed (cost.ts): `cells`, the numbers in the answer, bounded by
+   * SERVICE_LIMITS.maxAnswerCells (422 beyond); `work`, which decides whether it runs
+   * on the request thread or in a worker thread. Cheap: at most one pass over the stations.
+   */
+  cost(hull: HullModel, params: P): Cost;
   run(hull: LoadedHull, params: P): R;
   /** The CSV form of the result, when there is one. */
   readonly csv?: (result: R) => string;
   /** The answer for offsets that break a rule, when that is an answer rather than a failure. */
   readonly invalid?: (err: HalfbreadthError) => R;
+  /** True when `run` asks for the notes on how the offsets file is written (hull.notes()), which a stored hull reads from its upload. */
+  readonly usesNotes?: boolean;
 }
 
 /** Any computation, for the list of them (parameters and results differ from one to the next). */

@@ -5,6 +5,9 @@ import { hydrostaticResult, hydrostaticsCsv, type HydrostaticResult } from '../.
 import { DensityBody, DensityQuery, DraftsBody, DraftsQuery } from '../requestFields.js';
 import { HydrostaticResultSchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
+import { prepareWork } from './cost.js';
+import { HYDROSTATIC_FIELDS } from '../../core/upright/hydrostaticFields.js';
+import { requireFormedRows } from '../../core/upright/formedRows.js';
 
 interface Params {
   drafts: number[];
@@ -20,7 +23,13 @@ export const hydrostatics: Computation<Params, HydrostaticResult> = {
   query: z.object({ drafts: DraftsQuery, density: DensityQuery }),
   body: z.object({ drafts: DraftsBody, density: DensityBody }),
   result: HydrostaticResultSchema,
-  key: (p) => `drafts=${p.drafts.join(',')}&density=${p.density}`,
-  run: (h, p) => hydrostaticResult(h.hull, p.density, hydrostaticTable(h.prepared, p.drafts, p.density)),
+  // The drafts' exact doubles as base64: canonical (0.5 and 0.50 give one key) and far cheaper than writing them as text.
+  key: (p) => `drafts=${Buffer.from(Float64Array.from(p.drafts).buffer).toString('base64')}&density=${p.density}`,
+  cost: (hull, p) => ({ cells: p.drafts.length * HYDROSTATIC_FIELDS.length, work: prepareWork(hull) + p.drafts.length * hull.stations.length }),
+  run: (h, p) => {
+    const rows = hydrostaticTable(h.prepared, p.drafts, p.density);
+    requireFormedRows(rows);
+    return hydrostaticResult(h.hull, p.density, rows);
+  },
   csv: hydrostaticsCsv,
 };

@@ -10,6 +10,8 @@ import { SHEET_RESULTS, sheetCsv, sheetResult, type SheetResult } from '../../co
 import { DensityBody, DensityQuery, DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
+import { prepareWork } from './cost.js';
+import { requireFormed } from '../../core/upright/formedRows.js';
 
 const OrdinateSchema = z.object({
   point: z.number().int().describe('index of the point in the station\'s list, the keel point 0'),
@@ -97,12 +99,12 @@ const SheetTotalsSchema = z
   })
   .describe('the sums of the product columns');
 
-/** The results with the formula and unit of core's SHEET_RESULTS; null where a quotient is undefined, as in the hydrostatic table. */
+/** The results with the formula and unit of core's SHEET_RESULTS; a draft where one cannot be formed is an error (core/upright/formedRows.ts). */
 const SheetResultsSchema = z
   .object(
-    Object.fromEntries(SHEET_RESULTS.map((f) => [f.key, z.number().nullable().describe(`${f.formula} (${f.unit})`)])) as Record<
+    Object.fromEntries(SHEET_RESULTS.map((f) => [f.key, z.number().describe(`${f.formula} (${f.unit})`)])) as Record<
       (typeof SHEET_RESULTS)[number]['key'],
-      z.ZodNullable<z.ZodNumber>
+      z.ZodNumber
     >,
   )
   .describe('what the sums give: the particulars of the hydrostatic table at this draft');
@@ -141,6 +143,20 @@ export const sheet: Computation<Params, SheetResult> = {
   body: z.object({ draft: DraftBody, density: DensityBody }),
   result: SheetResultSchema,
   key: (p) => `draft=${p.draft}&density=${p.density}`,
-  run: (h, p) => sheetResult(h.hull, calculationSheet(h.prepared, p.draft, p.density)),
+  // Per station about fifteen numbers, and seven per ordinate of its vertical sheet (its points below the draft, and one more).
+  cost: (hull, p) => {
+    let ordinates = 0;
+    for (const st of hull.stations) {
+      ordinates += 1;
+      for (const q of st.points) if (q.z < p.draft) ordinates++;
+    }
+    const cells = 15 * hull.stations.length + 7 * ordinates;
+    return { cells, work: prepareWork(hull) + cells };
+  },
+  run: (h, p) => {
+    const s = calculationSheet(h.prepared, p.draft, p.density);
+    requireFormed(p.draft, s.results);
+    return sheetResult(h.hull, s);
+  },
   csv: sheetCsv,
 };

@@ -12,7 +12,7 @@ import { jsonErrorOffset, lineColumn } from '../jsonSyntax.js';
 
 export type UploadBody =
   | { readonly mediaType: 'text/csv'; readonly bytes: Buffer; readonly text: string }
-  | { readonly mediaType: 'application/json'; readonly bytes: Buffer; readonly json: unknown };
+  | { readonly mediaType: 'application/json'; readonly bytes: Buffer; readonly text: string };
 
 const CSV_TYPE = 'text/csv';
 const JSON_TYPE = 'application/json';
@@ -51,8 +51,12 @@ function utf8(bytes: Buffer, where: 'offsets' | 'body', code: 'HYD_CSV_UNREADABL
   return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
 }
 
-function parseJson(bytes: Buffer): unknown {
-  const text = utf8(bytes, 'body', 'HYD_BODY_UNREADABLE');
+/**
+ * The value of a JSON body's text. Parsed where the body is used, not as it arrives, so
+ * that a large body is parsed in a worker thread (server/jobs/) rather than on the
+ * request thread.
+ */
+export function parseJsonText(text: string): unknown {
   if (text.trim() === '') serviceFail('HYD_BODY_UNREADABLE', ['body'], 'the body is empty; send a JSON object');
   try {
     return JSON.parse(text);
@@ -79,7 +83,7 @@ export function registerUploadBody(app: FastifyInstance): void {
     try {
       checkCharset(req);
       const bytes = body as Buffer;
-      done(null, { mediaType: JSON_TYPE, bytes, json: parseJson(bytes) } satisfies UploadBody);
+      done(null, { mediaType: JSON_TYPE, bytes, text: utf8(bytes, 'body', 'HYD_BODY_UNREADABLE') } satisfies UploadBody);
     } catch (e) {
       done(e as Error, undefined);
     }

@@ -5,32 +5,25 @@
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
 import { CAUTION } from '../../core/common/caution.js';
-import { fail } from '../../core/common/errors.js';
-import { hullSummary } from '../../core/report/formatHydrostatics.js';
+import { hullSummary, type HullSummary } from '../../core/report/formatHydrostatics.js';
 import { jsonText } from '../jsonText.js';
-import { LengthUnitSchema } from '../../core/common/units.js';
+import { LENGTH_UNITS, LengthUnitSchema } from '../../core/common/units.js';
 import { writeOffsetsCsv } from '../../core/offsets/writeOffsets.js';
 import type { ServiceContext } from '../context.js';
-import { answerNotModified, etagOf } from '../etag.js';
-import { hullFromCsv, hullFromJson, renamed, type ReadHull } from '../hullInput.js';
+import { answerNotModified, hullTag, ifMatchHolds } from '../etag.js';
+import { readUpload, UploadJsonBody, type ReadOutcome } from '../jobs/job.js';
 import { chooseFormat, CSV_MEDIA_TYPE, JSON_MEDIA_TYPE } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, FormatQuery, NameField } from '../requestFields.js';
 import { HullListSchema, HullRecordSchema, HullWithOffsetsSchema } from '../responseSchemas.js';
-import { HullModelSchema } from '../../core/hull/hullModel.js';
+import { HullModelSchema, type HullModel } from '../../core/hull/hullModel.js';
 import { serviceFail } from '../serviceErrors.js';
-import type { HullMeta, NewHull } from '../store/hullStore.js';
-import { parseOrFail, requireObject } from '../validate.js';
+import type { HullForm, HullMeta, NewHull } from '../store/hullStore.js';
+import { parseOrFail } from '../validate.js';
 import type { RouteSpec } from './routeSpec.js';
 import { requireHullMeta } from './storedHull.js';
 
 const UploadQuery = z.object({ name: NameField }).strict();
-const UploadJsonBody = z
-  .object({
-    offsets: z.custom<unknown>((v) => v !== undefined, { error: 'offsets is required: the hull model, lengths in m' }),
-    name: NameField,
-  })
-  .strict();
 const UploadJsonBodyDocument = UploadJsonBody.extend({ offsets: HullModelSchema });
 
 const ReadQuery = z
@@ -41,26 +34,51 @@ const ReadQuery = z
   .strict();
 const EmptyQuery = z.object({}).strict();
 
-/** The hull in a request body, with the name given beside it if any. */
-function uploadedHull(req: FastifyRequest): NewHull {
-  const upload = uploadOf(req);
-  const q = parseOrFail(UploadQuery, req.query, FIELD_CODES);
-  let read: ReadHull;
-  let name = q.name;
-  if (upload.mediaType === 'text/csv') {
-    read = hullFromCsv(upload.text);
-  } else {
-    const body = parseOrFail(UploadJsonBody, requireObject(upload.json, '{"offsets": <hull model>, "name"?}'), FIELD_CODES);
-    if (body.name !== undefined && name !== undefined) fail('HYD_BAD_ARGUMENT', ['name'], 'name: given both in the query and in the body; give it once');
-    name ??= body.name;
-    read = hullFromJson(body.offsets);
-  }
-  const r = renamed(read, name);
-  return { model: r.hull, form: r.form, units: r.units, mediaType: upload.mediaType, source: upload.bytes };
+/** An upload read for the store, and the summary its record gives. */
+interface Upload {
+  readonly hull: NewHull;
+  readonly summary: HullSummary;
 }
 
-function record(meta: HullMeta, hull: NewHull['model']): z.infer<typeof HullRecordSchema> {
-  const s = hullSummary(hull);
+/**
+ * The hull in a request body, with the name given beside it if any. A small body is read
+ * on this thread; a large one in a worker thread, which gives back the model's JSON text.
+ */
+async function uploadedHull(req: FastifyRequest, ctx: ServiceContext): Promise<Upload> {
+  const upload = uploadOf(req);
+  const q = parseOrFail(UploadQuery, req.query, FIELD_CODES);
+  const source = upload.mediaType === 'text/csv' ? ({ kind: 'csv', text: upload.text } as const) : ({ kind: 'json', text: upload.text } as const);
+  const kept = { mediaType: upload.mediaType, source: upload.bytes };
+  if (upload.bytes.length <= ctx.limits.inlineBytes) {
+    const r = readUpload(source, q.name);
+    return { hull: { model: r.hull, form: r.form, units: r.units, ...kept }, summary: hullSummary(r.hull) };
+  }
+  const r = (await ctx.pool.run({ kind: 'read', source, name: q.name })) as ReadOutcome;
+  return {
+    hull: { model: { text: r.modelText, name: r.summary.name, stationCount: r.summary.stations }, form: r.form as HullForm, units: r.units, ...kept },
+    summary: r.summary,
+  };
+}
+
+/** The tags a GET of the hull gives now: the record in every unit and form, and the upload's. */
+function currentTags(meta: HullMeta): string[] {
+  const tags = [`"${meta.hash}"`];
+  for (const units of LENGTH_UNITS) for (const format of ['json', 'csv']) tags.push(hullTag(meta, units, format));
+  return tags;
+}
+
+/** 412 when If-Match names another version of the hull than the stored one. */
+function requireIfMatch(req: FastifyRequest, meta: HullMeta): void {
+  if (!ifMatchHolds(req, currentTags(meta))) {
+    serviceFail(
+      'HYD_PRECONDITION_FAILED',
+      ['headers', 'if-match'],
+      `hull "${meta.id}" has changed since the version If-Match names (it was last written ${meta.updated}); GET it again, and send its new ETag`,
+    );
+  }
+}
+
+function record(meta: HullMeta, s: HullSummary): z.infer<typeof HullRecordSchema> {
   const self = `/v1/hulls/${meta.id}`;
   return {
     id: meta.id,
@@ -92,24 +110,29 @@ function record(meta: HullMeta, hull: NewHull['model']): z.infer<typeof HullReco
 
 const sendJson = (reply: FastifyReply, value: unknown): FastifyReply => reply.type(JSON_MEDIA_TYPE).send(jsonText(value));
 
-function create(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
-  const h = uploadedHull(req);
-  const meta = ctx.store.create(h);
-  return sendJson(reply.code(201).header('location', `/v1/hulls/${meta.id}`), record(meta, h.model));
+async function create(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
+  const h = await uploadedHull(req, ctx);
+  const meta = ctx.store.create(h.hull);
+  return sendJson(reply.code(201).header('location', `/v1/hulls/${meta.id}`).header('etag', hullTag(meta, 'm', 'json')), record(meta, h.summary));
 }
 
-function replace(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
-  const id = requireHullMeta(ctx.store, req).id;
-  const h = uploadedHull(req);
-  const meta = ctx.store.replace(id, h);
-  if (meta === undefined) serviceFail('HYD_HULL_NOT_FOUND', ['id'], `no hull is stored under id "${id}"`);
-  ctx.cache.forget(id);
-  return sendJson(reply, record(meta, h.model));
+async function replace(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
+  const before = requireHullMeta(ctx.store, req);
+  requireIfMatch(req, before);
+  const h = await uploadedHull(req, ctx);
+  // Read again after the upload was read (perhaps in a worker): another write may have come between.
+  const now = requireHullMeta(ctx.store, req);
+  requireIfMatch(req, now);
+  const meta = ctx.store.replace(now.id, h.hull);
+  if (meta === undefined) serviceFail('HYD_HULL_NOT_FOUND', ['id'], `no hull is stored under id "${now.id}"`);
+  ctx.cache.forget(now.id);
+  return sendJson(reply.header('etag', hullTag(meta, 'm', 'json')), record(meta, h.summary));
 }
 
 function remove(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
   parseOrFail(EmptyQuery, req.query);
   const meta = requireHullMeta(ctx.store, req);
+  requireIfMatch(req, meta);
   ctx.store.delete(meta.id);
   ctx.cache.forget(meta.id);
   return reply.code(204).send();
@@ -121,17 +144,28 @@ function list(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Fa
   return sendJson(reply, { hulls, caution: CAUTION });
 }
 
-function read(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
+async function read(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
   const meta = requireHullMeta(ctx.store, req);
   const q = parseOrFail(ReadQuery, req.query, FIELD_CODES);
   const format = chooseFormat(req, q.format);
   const units = q.units ?? 'm';
-  if (answerNotModified(req, reply, etagOf([meta.hash, meta.name, 'hull', units, format]))) return reply;
-  const hull = ctx.cache.get(meta).hull;
+  if (answerNotModified(req, reply, hullTag(meta, units, format))) return reply;
+  const small = meta.bytes <= ctx.limits.inlineBytes;
   if (format === 'csv') {
-    return reply.type(CSV_MEDIA_TYPE).header('content-disposition', `inline; filename="${meta.id}.csv"`).send(writeOffsetsCsv(hull, { units }));
+    const csv = small
+      ? writeOffsetsCsv(ctx.store.get(meta.id)!.model, { units })
+      : ((await ctx.pool.run({ kind: 'export', modelText: ctx.store.modelText(meta.id) ?? '{}', units })) as string);
+    return reply.type(CSV_MEDIA_TYPE).header('content-disposition', `inline; filename="${meta.id}.csv"`).send(csv);
   }
-  return sendJson(reply, { ...record(meta, hull), offsets: hull });
+  if (small) {
+    const hull = ctx.store.get(meta.id)!.model;
+    return sendJson(reply, { ...record(meta, hullSummary(hull)), offsets: hull });
+  }
+  // A large model is not parsed here: its stored JSON text goes into the answer as it is.
+  const text = ctx.store.modelText(meta.id) ?? '{}';
+  const summary = JSON.parse(text, (k, v: unknown) => (k === 'points' ? [] : v)) as HullModel;
+  const head = jsonText(record(meta, hullSummary(summary)));
+  return reply.type(JSON_MEDIA_TYPE).send(`${head.slice(0, -1)},"offsets":${text}}`);
 }
 
 function source(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
@@ -159,8 +193,8 @@ export const HULL_ROUTES: readonly RouteSpec[] = [
     description: 'Store offsets (an offsets file as text/csv, or {"offsets": <hull model>, "name"?} as JSON). The upload is kept byte for byte.',
     query: UploadQuery,
     body: UPLOAD_BODY,
-    responses: { 201: { description: 'stored', json: HullRecordSchema, headers: ['Location'] } },
-    problems: [400, 413, 415, 422],
+    responses: { 201: { description: 'stored', json: HullRecordSchema, headers: ['Location', 'ETag'] } },
+    problems: [400, 413, 415, 422, 503],
     handler: create,
   },
   {
@@ -211,11 +245,13 @@ export const HULL_ROUTES: readonly RouteSpec[] = [
     operationId: 'replaceHull',
     tag: 'hulls',
     summary: 'Replace a stored hull',
-    description: 'New offsets for a stored hull; its id and creation time stay.',
+    description:
+      'New offsets for a stored hull; its id and creation time stay. Send If-Match with the ETag of a GET of the hull: when the hull has ' +
+      'changed since, the answer is 412 and nothing is written (no lost update). Without If-Match the last writer wins.',
     query: UploadQuery,
     body: UPLOAD_BODY,
-    responses: { 200: { description: 'replaced', json: HullRecordSchema } },
-    problems: [400, 404, 413, 415, 422],
+    responses: { 200: { description: 'replaced', json: HullRecordSchema, headers: ['ETag'] } },
+    problems: [400, 404, 412, 413, 415, 422, 503],
     handler: replace,
   },
   {
@@ -224,10 +260,10 @@ export const HULL_ROUTES: readonly RouteSpec[] = [
     operationId: 'deleteHull',
     tag: 'hulls',
     summary: 'Delete a stored hull',
-    description: 'Remove the hull and its upload.',
+    description: 'Remove the hull and its upload. With If-Match, only the version it names (412 otherwise).',
     query: EmptyQuery,
     responses: { 204: { description: 'deleted' } },
-    problems: [400, 404],
+    problems: [400, 404, 412],
     handler: remove,
   },
 ];

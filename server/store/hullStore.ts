@@ -14,7 +14,7 @@
  * writes. Another process may read the file, but must not write it while the service runs.
  */
 import { createHash, randomBytes } from 'node:crypto';
-import { mkdirSync } from 'node:fs';
+import { closeSync, mkdirSync, openSync } from 'node:fs';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import type { HullModel } from '../../core/hull/hullModel.js';
@@ -24,8 +24,15 @@ import { migrate } from './migrations.js';
 /** How the offsets arrived: a CSV file in one of its forms, or a JSON model. */
 export type HullForm = 'grid' | 'points' | 'model';
 
+/** A model already written as JSON text (by a worker thread that read a large upload), with what the store keeps beside it. */
+export interface SerialisedModel {
+  readonly text: string;
+  readonly name: string;
+  readonly stationCount: number;
+}
+
 export interface NewHull {
-  readonly model: HullModel;
+  readonly model: HullModel | SerialisedModel;
   readonly mediaType: string;
   /** The upload as it arrived. */
   readonly source: Buffer;
@@ -104,8 +111,12 @@ export class HullStore {
   /** Open (creating if need be) the store in `dataDir`, or in memory for ':memory:'. */
   static open(dataDir: string): HullStore {
     if (dataDir === ':memory:') return new HullStore(new Database(':memory:'));
-    mkdirSync(dataDir, { recursive: true });
-    return new HullStore(new Database(join(dataDir, STORE_FILE)));
+    // The hulls are the users' work: readable by the service's owner only. SQLite gives
+    // its -wal and -shm files the mode of the database file.
+    mkdirSync(dataDir, { recursive: true, mode: 0o700 });
+    const file = join(dataDir, STORE_FILE);
+    closeSync(openSync(file, 'a', 0o600));
+    return new HullStore(new Database(file));
   }
 
   private constructor(db: Database.Database) {
@@ -127,6 +138,7 @@ export class HullStore {
       meta: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE id = ?`),
       model: db.prepare<[string], MetaRow & { model: string }>(`SELECT ${META_COLUMNS}, model FROM hulls WHERE id = ?`),
       source: db.prepare<[string], { media_type: string; source: Buffer }>('SELECT media_type, source FROM hulls WHERE id = ?'),
+      modelText: db.prepare<[string], { model: string }>('SELECT model FROM hulls WHERE id = ?'),
       list: db.prepare<[], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls ORDER BY created, id`),
       byHash: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE source_hash = ? ORDER BY created, id`),
       count: db.prepare<[], { n: number }>('SELECT count(*) AS n FROM hulls'),
@@ -134,17 +146,18 @@ export class HullStore {
   }
 
   private row(id: string, h: NewHull, now: string) {
+    const m = h.model;
     return {
       id,
-      name: h.model.name,
+      name: m.name,
       updated: now,
       mediaType: h.mediaType,
       source: h.source,
       hash: sha256(h.source),
-      model: JSON.stringify(h.model),
+      model: 'text' in m ? m.text : JSON.stringify(m),
       form: h.form,
       units: h.units,
-      stations: h.model.stations.length,
+      stations: 'text' in m ? m.stationCount : m.stations.length,
     };
   }
 
@@ -183,6 +196,11 @@ export class HullStore {
   get(id: string): StoredHull | undefined {
     const r = this.stmt.model.get(id);
     return r === undefined ? undefined : { ...toMeta(r), model: JSON.parse(r.model) as HullModel };
+  }
+
+  /** The stored model as its JSON text, not parsed (a worker thread parses it). */
+  modelText(id: string): string | undefined {
+    return this.stmt.modelText.get(id)?.model;
   }
 
   /** The upload as it arrived. */

@@ -68,7 +68,7 @@ describe('sheet', () => {
   test('refuses more than one draft, and a draft outside the hull, with exit status 2', async () => {
     const two = await run(['sheet', WORKBOAT, '--draft', '1,1.2']);
     expect(two.code).toBe(2);
-    expect(two.err).toContain('--draft takes one draft');
+    expect(two.err).toContain("--draft '1,1.2' is not one number of metres");
     const high = await run(['sheet', WORKBOAT, '--draft', '3']);
     expect(high.code).toBe(2);
     expect(high.err).toContain('outside the hull');

@@ -150,3 +150,24 @@ describe('what a warning says', () => {
     expect(w!.message).toBe('station x = 5 m, z = 1 m: half-breadth 2.08 m is not fair along the waterline and the section; its neighbours suggest 2 m');
   });
 });
+
+describe('the cost of the check', () => {
+  test('a line of 5,000 offsets spanning seven orders of magnitude is checked within 3 s', () => {
+    // The probe of 2026-12-02 (half-breadths 1e100 to 1e308 on 5,000 stations) froze the
+    // service for 47 s: every round of the check re-predicted the whole line, so a line
+    // with many unfair-looking places cost O(n^2). The same line within the physical
+    // limits (1e-3 to 1e4 m) took 35 s with that code; now a correction re-predicts only
+    // its neighbourhood and the worst place comes from a heap, O(n log n): about 0.3 s.
+    // A bound on the defect with a tenfold margin for a busy machine, not a benchmark.
+    let seed = 7;
+    const rnd = (): number => (seed = (seed * 16807) % 2147483647) / 2147483647; // Park and Miller, CACM 31(10), 1988
+    const rows = Array.from({ length: 5000 }, (_, i) => `${i},${(10 ** (-3 + 7 * rnd())).toPrecision(6)},${(10 ** (-3 + 7 * rnd())).toPrecision(6)}`);
+    const { hull } = readOffsetsCsv(['x,0,1', ...rows].join('\n'));
+    const t0 = performance.now();
+    const warnings = fairnessWarnings(hull);
+    expect(performance.now() - t0).toBeLessThan(3000);
+    // Noise that wild is unfair everywhere; the check still names offsets one by one.
+    expect(warnings.length).toBeGreaterThan(0);
+    expect(new Set(warnings.map((w) => w.path.join('.'))).size).toBe(warnings.length);
+  });
+});

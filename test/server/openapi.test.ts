@@ -63,7 +63,7 @@ describe('openapi/openapi.json', () => {
     const doc = JSON.parse(committed);
     const op = doc.paths['/v1/hulls/{id}/hydrostatics'].get;
     expect(op.responses['404'].content['application/problem+json'].schema).toEqual({ $ref: '#/components/schemas/Problem' });
-    expect(Object.keys(op.responses).sort()).toEqual(['200', '304', '400', '404', '406', '422']);
+    expect(Object.keys(op.responses).sort()).toEqual(['200', '304', '400', '404', '406', '422', '503']);
   });
 });
 
@@ -108,7 +108,7 @@ describe('problem codes and statuses', () => {
     const codes = [...Object.keys(ERROR_CODES), ...Object.keys(SERVICE_CODES)].sort();
     expect([...PROBLEM_CODES].sort()).toEqual(codes);
     expect(new Set(codes.map((c) => problemSlug(c as never))).size).toBe(codes.length);
-    for (const c of PROBLEM_CODES) expect([400, 404, 405, 406, 413, 415, 422, 500]).toContain(STATUS_OF_CODE[c]);
+    for (const c of PROBLEM_CODES) expect([400, 404, 405, 406, 408, 412, 413, 415, 422, 431, 500, 503]).toContain(STATUS_OF_CODE[c]);
   });
 
   test('docs/api.md lists every code with its type and status', () => {

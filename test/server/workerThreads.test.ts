@@ -1,0 +1,199 @@
+/**
+ * Heavy work off the request thread: a large computation runs in a worker thread while
+ * `/healthz` and a small table are answered within 50 ms; a small table stays on the
+ * request thread (no thread is even started); the answers are the same wherever the work
+ * ran; and a computation past its time limit is stopped with a problem document.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, test } from 'vitest';
+import { buildApp } from '../../server/app.js';
+import { startService } from '../fixtures/serviceProcess.js';
+import { csvHeaders, expectProblem } from '../fixtures/serverHelpers.js';
+import { readFileSync } from 'node:fs';
+
+const dirs: string[] = [];
+afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));
+
+const workboat = readFileSync(new URL('../../offsets-demo/workboat.csv', import.meta.url), 'utf8');
+
+/** A fair grid of `stations` x `waterlines` (a smooth bilge-less form), as text. */
+function largeGrid(stations: number, waterlines: number): string {
+  const zs = Array.from({ length: waterlines }, (_, j) => (2 * j) / (waterlines - 1));
+  const lines = [`x,${zs.join(',')}`];
+  for (let i = 0; i < stations; i++) {
+    const x = (100 * i) / (stations - 1);
+    const b = 2 + Math.sin((Math.PI * i) / (stations - 1));
+    lines.push(`${x},${zs.map((z) => (b * (0.5 + z / 4)).toFixed(5)).join(',')}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+describe('the request thread stays free', () => {
+  test('healthz and a 20-draft table are answered within 50 ms while the check of 80,000 offsets runs', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'halfbreadth-workers-'));
+    dirs.push(dir);
+    const service = await startService({ HALFBREADTH_DATA: dir });
+    try {
+      // The check of 500 x 160 offsets is about 0.3 s of work in a worker thread on an idle
+      // 2-core machine (longer on a busy one, the thread running at a lower priority), ten
+      // times what the ten probes below take (a few ms each), so they overlap it.
+      const heavy = fetch(`${service.base}/v1/check`, { method: 'POST', headers: csvHeaders, body: largeGrid(500, 160) });
+      let done = false;
+      void heavy.then(() => (done = true));
+      // The service logs when the job has gone to a worker: the body is in and the loop is free.
+      await service.logged((l) => l.msg === 'computation sent to a worker thread');
+      const drafts = Array.from({ length: 20 }, (_, k) => (0.3 + 0.09 * k).toFixed(2)).join(',');
+      const probe = async (url: string): Promise<number> => {
+        const t0 = performance.now();
+        const res = await fetch(url);
+        await res.text();
+        expect(res.status).toBe(200);
+        return performance.now() - t0;
+      };
+      // The bound is a property of the service, 50 ms; a round trip is about 1 to 5 ms here.
+      // Two things are asserted. (1) Every probe is answered while the heavy request still
+      // runs: with the event loop blocked (the defect) the first probe would wait for the
+      // whole computation. (2) The median probe is within 50 ms. The median, not the
+      // slowest: on this shared 2-core machine other processes (the other test files,
+      // other sessions; load averages of 5 to 10 are seen) can hold both cores for several
+      // time slices, for client and service alike, and stretch a single round trip past
+      // 50 ms although the service's loop is free; a blocked loop would stretch them all.
+      const times: number[] = [];
+      for (let k = 0; k < 5; k++) {
+        times.push(await probe(`${service.base}/healthz`));
+        times.push(await probe(`${service.base}/v1/hulls/demo-workboat/hydrostatics?drafts=${drafts}&density=${1 + k / 1000}`));
+      }
+      expect(done, 'the heavy request was still running while the probes were answered').toBe(false);
+      const sorted = [...times].sort((a, b) => a - b);
+      expect(sorted[sorted.length >> 1], `probe round trips, ms: ${times.map((t) => t.toFixed(1)).join(' ')}`).toBeLessThan(50);
+      const res = await heavy;
+      expect(res.status).toBe(200);
+      const body = (await res.json()) as { valid: boolean; particulars: { points: number } };
+      expect(body.valid).toBe(true);
+      expect(body.particulars.points).toBe(80_000);
+    } finally {
+      await service.stop();
+    }
+  }, 60_000);
+});
+
+describe('where the work runs', () => {
+  test('a 20-draft table stays on the request thread: no worker thread is started', async () => {
+    const app = await buildApp();
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/hydrostatics?drafts=0.5:0.05:1.45', headers: csvHeaders, payload: workboat });
+      expect(res.statusCode).toBe(200);
+      expect(app.halfbreadth.pool.threads).toBe(0);
+    } finally {
+      await app.close();
+    }
+  });
+
+  test('answers and problems are the same whether the work ran on the request thread or in a worker', async () => {
+    const inline = await buildApp();
+    // Every body and every computation to the workers.
+    const workers = await buildApp({ limits: { inlineBytes: 0, inlineWork: 0 } });
+    try {
+      const requests = [
+        { method: 'POST', url: '/v1/hydrostatics?drafts=0.5:0.1:1.5', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/sheet?draft=1.2&format=csv', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/check', headers: csvHeaders, payload: workboat.replace(/\n([^#\n][^,\n]*),/, '\n$1,-1,') },
+        { method: 'POST', url: '/v1/hydrostatics?drafts=9', headers: csvHeaders, payload: workboat },
+        { method: 'POST', url: '/v1/bonjean', headers: { 'content-type': 'application/json' }, payload: JSON.stringify({ offsets: { stations: [] }, drafts: [1] }) },
+      ] as const;
+      for (const r of requests) {
+        const a = await inline.inject(r);
+        const b = await workers.inject(r);
+        expect(b.statusCode, r.url).toBe(a.statusCode);
+        expect(b.headers['content-type']).toBe(a.headers['content-type']);
+        expect(b.body.replace(/"requestId":"[^"]*"/, '')).toBe(a.body.replace(/"requestId":"[^"]*"/, ''));
+      }
+      expect(workers.halfbreadth.pool.threads).toBeGreaterThan(0);
+    } finally {
+      await inline.close();
+      await workers.close();
+    }
+  });
+
+  test('storing, reading and computing on a stored hull give the same answers when a worker reads and writes it', async () => {
+    const inline = await buildApp();
+    const workers = await buildApp({ limits: { inlineBytes: 0, inlineWork: 0 } });
+    try {
+      const strip = (body: string): unknown => {
+        const { id: _id, created: _c, updated: _u, links: _l, ...rest } = JSON.parse(body) as Record<string, unknown>;
+        return rest;
+      };
+      const ids: string[] = [];
+      for (const app of [inline, workers]) {
+        const res = await app.inject({ method: 'POST', url: '/v1/hulls?name=threads', headers: csvHeaders, payload: workboat });
+        expect(res.statusCode).toBe(201);
+        ids.push((JSON.parse(res.body) as { id: string }).id);
+      }
+      const [a, b] = ids as [string, string];
+      const get = (app: typeof inline, id: string, rest: string) => app.inject({ method: 'GET', url: `/v1/hulls/${id}${rest}` });
+      expect(strip((await get(workers, b, '')).body)).toEqual(strip((await get(inline, a, '')).body));
+      for (const rest of ['?format=csv', '?format=csv&units=ft-in-8', '/hydrostatics?drafts=0.5:0.1:1.5', '/sheet?draft=1&format=csv', '/check']) {
+        const x = await get(inline, a, rest);
+        const y = await get(workers, b, rest);
+        expect(y.statusCode, rest).toBe(200);
+        expect(y.body, rest).toBe(x.body);
+      }
+      const put = await workers.inject({ method: 'PUT', url: `/v1/hulls/${b}`, headers: { ...csvHeaders, 'if-match': (await get(workers, b, '')).headers.etag as string }, payload: workboat });
+      expect(put.statusCode).toBe(200);
+      const bad = await workers.inject({ method: 'POST', url: '/v1/hulls', headers: csvHeaders, payload: 'x,0,1\n0,1e308,1\n1,1,1\n2,1,1\n' });
+      expect(expectProblem(bad, 422).errors[0]!.code).toBe('HYD_VALUE_RANGE');
+    } finally {
+      await inline.close();
+      await workers.close();
+    }
+  });
+
+  test('the probe that froze the service for 47 s (5,000 rows of half-breadths 1e100 to 1e308 sent to check) is answered at once', async () => {
+    const app = await buildApp();
+    try {
+      const rows = Array.from({ length: 5000 }, (_, i) => `${i},1e${100 + ((i * 37) % 209)}`);
+      const t0 = performance.now();
+      const res = await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: ['x,0,1', ...rows].join('\n') });
+      // A bound on the defect (47 s of the event loop before), with a wide margin.
+      expect(performance.now() - t0).toBeLessThan(3000);
+      expect(res.statusCode).toBe(200);
+      const body = JSON.parse(res.body) as { valid: boolean; issues: { code: string }[] };
+      expect(body.valid).toBe(false);
+      expect(body.issues[0]!.code).toBe('HYD_VALUE_RANGE');
+    } finally {
+      await app.close();
+    }
+  });
+
+  test('a computation past its time limit is stopped: 503 with a problem document naming the limit', async () => {
+    // The check of 1,000 x 300 offsets takes longer than 0.6 s on any machine (about 1.3 s
+    // on an idle one). The limit may fall while the thread still loads the job's code
+    // (a few hundred ms): that is stopped cleanly too (server/jobs/workerEntry.cts).
+    const app = await buildApp({ limits: { computeTimeout: 600, inlineWork: 0 } });
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/check', headers: csvHeaders, payload: largeGrid(1000, 300) });
+      const doc = expectProblem(res, 503);
+      expect(doc.errors[0]!.code).toBe('HYD_COMPUTE_LIMIT');
+      expect(doc.detail).toContain('computeTimeout');
+      // The service goes on answering.
+      const again = await app.inject({ method: 'GET', url: '/healthz' });
+      expect(again.statusCode).toBe(200);
+    } finally {
+      await app.close();
+    }
+  });
+
+  test('an answer over the size limit is refused before anything is computed, naming the limit', async () => {
+    const app = await buildApp({ limits: { maxAnswerCells: 1000 } });
+    try {
+      const res = await app.inject({ method: 'POST', url: '/v1/bonjean?drafts=0.1:0.01:2', headers: csvHeaders, payload: workboat });
+      const doc = expectProblem(res, 422);
+      expect(doc.errors[0]!.code).toBe('HYD_ANSWER_TOO_LARGE');
+      expect(doc.detail).toContain('maxAnswerCells');
+    } finally {
+      await app.close();
+    }
+  });
+});
