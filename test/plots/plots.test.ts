@@ -34,7 +34,7 @@ import type { CriterionResult, GzResult } from '../../core/plots/stabilityShapes
 import { bonjean } from '../../core/upright/bonjean.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
-import { boxBarge, parabolicHull } from '../fixtures/hulls.js';
+import { boxBarge, parabolicHull, planWedge } from '../fixtures/hulls.js';
 import { all, attr, axisScale, hasVertex, num, parseSvg, pathVertices, textOf } from '../helpers/svgRead.js';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -93,6 +93,22 @@ describe('the lines', () => {
     // True shape: one metre is as long across as it is along.
     expect(near(sx(1) - sx(0), sz(0) - sz(1), 0.02)).toBe(true);
     expect(textOf(all(doc, 'text').find((t) => attr(t, 'data-role') === 'fairness')!)).toBe('The fairness check reports no offset.');
+  });
+
+  test('a wedge in plan: the sections forward of amidships are drawn right of the centreline, those aft left', () => {
+    // Half-breadth (B/2) x / L: each station's offsets are all at one half-breadth.
+    const doc = parseSvg(linesPlot(linesData(prepareHull(planWedge(L, B, D, 11, 5)), [])));
+    const sb = axisScale(doc, 'x', 1, 'from-zero');
+    const sz = axisScale(doc, 'y', 0);
+    const dots = all(doc, 'circle').filter((c) => attr(c, 'r') === '1.9').map((c) => [num(c, 'cx'), num(c, 'cy')] as const);
+    const at = (y: number) => dots.some(([cx, cy]) => near(cx, y) && near(cy, sz(1)));
+    for (const x of [1, 2, 3, 7, 8, 9]) {
+      const y = (B / 2) * (x / L);
+      const right = sb(y);
+      const left = 2 * sb(0) - right;
+      expect(at(right), `station x = ${x} on the right`).toBe(x > L / 2);
+      expect(at(left), `station x = ${x} on the left`).toBe(x < L / 2);
+    }
   });
 
   test('an offset moved off a fair hull is ringed and listed as the fairness check reports it', () => {
