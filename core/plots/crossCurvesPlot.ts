@@ -31,15 +31,19 @@ export function crossCurvesPlot(d: CrossCurvesPlotData): string {
     yAxis: { title: 'KN, m', ticks: 8 },
   });
   const curves: string[] = [];
-  const labels: string[] = [];
+  const ends: { x: number; y: number; text: string; colour: string }[] = [];
   byHeel.forEach(([heel, rows], i) => {
     const pts = [...rows].sort((a, b) => a.displacement - b.displacement).map((r): [number, number] => [r.displacement, r.kn]);
     const dpath = line<[number, number]>().x((q) => f.sx(q[0])).y((q) => f.sy(q[1])).curve(curveMonotoneX).digits(2)(pts) ?? '';
     curves.push(el('path', { d: dpath, fill: 'none', 'stroke-width': 1.8, ...curveStroke(i), 'data-curve': `heel ${heel}` }));
     for (const [x, y] of pts) curves.push(el('circle', { cx: f.sx(x), cy: f.sy(y), r: 2, fill: curveStroke(i).stroke }));
     const last = pts[pts.length - 1];
-    if (last !== undefined) labels.push(text(f.sx(last[0]) + 6, f.sy(last[1]) + 4, `${short(heel)}°`, { 'font-size': 11, 'font-weight': 600, fill: curveStroke(i).stroke }));
+    if (last !== undefined) ends.push({ x: f.sx(last[0]) + 6, y: f.sy(last[1]) + 4, text: `${short(heel)}°`, colour: curveStroke(i).stroke });
   });
+  // Heel labels at the right-hand ends, pushed apart where curves end close together.
+  ends.sort((a, b) => b.y - a.y);
+  for (let k = 1; k < ends.length; k++) ends[k]!.y = Math.min(ends[k]!.y, ends[k - 1]!.y - 12);
+  const labels = ends.map((e) => text(e.x, e.y, e.text, { 'font-size': 11, 'font-weight': 600, fill: e.colour }));
   const legend = legendRows(
     byHeel.map(([heel], i) => ({ label: `heel ${short(heel)}°`, line: curveStroke(i) })),
     f.left,

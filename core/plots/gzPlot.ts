@@ -80,7 +80,10 @@ export function gzPlot(d: GzPlotData): string {
   const xr = f.sx(RADIAN_DEG);
   marks.push(el('line', { x1: x0, y1: y0, x2: xr, y2: f.sy(r.gm0), stroke: '#CC79A7', 'stroke-width': 1.6, 'stroke-dasharray': '7 3', 'data-role': 'gm0-tangent' }));
   marks.push(el('line', { x1: xr, y1: y0, x2: xr, y2: f.sy(r.gm0), stroke: '#CC79A7', 'stroke-width': 1.6, 'data-role': 'radian' }));
-  marks.push(text(xr + 5, (y0 + f.sy(r.gm0)) / 2, `GM0 = ${short(r.gm0)} m at 57.3° (1 rad)`, { 'font-size': 11.5, fill: '#A8397F', 'font-weight': 600 }));
+  // The label beside the vertical, on its left where the plot ends close to the right of it.
+  const gmLabel = `GM0 = ${short(r.gm0)} m at 57.3° (1 rad)`;
+  const roomRight = f.right - xr > gmLabel.length * 6.6;
+  marks.push(text(roomRight ? xr + 5 : xr - 5, (y0 + f.sy(r.gm0)) / 2, gmLabel, { 'font-size': 11.5, fill: '#A8397F', 'font-weight': 600, 'text-anchor': roomRight ? 'start' : 'end' }));
   if (Number.isFinite(r.maxGz)) {
     const cx = f.sx(r.angleOfMaxGz);
     const cy = f.sy(r.maxGz);
@@ -91,7 +94,7 @@ export function gzPlot(d: GzPlotData): string {
   if (vanishing !== null && Number.isFinite(vanishing)) {
     const vx = f.sx(vanishing);
     marks.push(el('path', { d: `M${vx},${y0}l-5,9h10z`, fill: INK.text, 'data-role': 'vanishing' }));
-    marks.push(text(vx, y0 + 22, `vanishing ${short(vanishing)}°`, { 'text-anchor': 'middle', 'font-size': 11, fill: INK.text }));
+    marks.push(text(vx - 6, y0 - 8, `vanishing ${short(vanishing)}°`, { 'text-anchor': 'end', 'font-size': 11, fill: INK.text }));
   }
   if (df !== null && Number.isFinite(df)) {
     marks.push(el('line', { x1: f.sx(df), x2: f.sx(df), y1: f.bottom, y2: f.top, stroke: '#0072B2', 'stroke-width': 1.8, 'stroke-dasharray': '3 3', 'data-role': 'downflooding' }));
