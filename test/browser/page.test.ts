@@ -164,6 +164,11 @@ describe('the page in a browser', () => {
         return a?.id || a?.getAttribute('href') || a?.textContent?.trim().slice(0, 30) || a?.tagName || '';
       }));
     }
+    // Every control has a label a screen reader reads, and every table header its scope.
+    const unlabelled = await page.evaluate(() => Array.from(document.querySelectorAll('input, select')).filter((e) => (e as HTMLInputElement).labels?.length === 0).map((e) => e.id));
+    expect(unlabelled).toEqual([]);
+    expect(await page.locator('#hydro-table th:not([scope])').count()).toBe(0);
+    expect(await page.locator('h1').count()).toBe(1);
     const wanted = ['#main', 'hull-select', 'show-hull', 'file-input', 'draft-from', 'draft-step', 'draft-to', 'density', 'compute-table'];
     const positions = wanted.map((w) => order.indexOf(w));
     expect(positions.every((p) => p >= 0), `focus went ${order.join(' > ')}`).toBe(true);
@@ -177,7 +182,7 @@ describe('the page in a browser', () => {
     await page.close();
   });
 
-  test('a dropped file with an error shows it with its line and column', async () => {
+  test('a dropped file with an error shows it with its line and column; a sound file chosen next is shown', async () => {
     const page = await openPage(1280, 900, small);
     const bad = readFileSync(join(ROOT, 'offsets-demo', 'workboat.csv'), 'utf8').replace('\n4.2,0.3,1.032,', '\n4.2,0.3,-1.032,');
     expect(bad).toContain('-1.032');
@@ -190,6 +195,11 @@ describe('the page in a browser', () => {
     await expect.poll(() => page.locator('#problems li').first().textContent()).toContain(`line ${line}, column 3`);
     expect(await page.locator('#problems').getAttribute('role')).toBe('alert');
     expect(await page.locator('#lines-section').isHidden()).toBe(true);
+    // A sound file in the points form, chosen with the file control: shown from the posted offsets.
+    await page.setInputFiles('#file-input', join(ROOT, 'offsets-demo', 'survey-launch.csv'));
+    await expect.poll(() => page.locator('#status').textContent(), { timeout: 20_000 }).toMatch(/^Showing Kestrow Plover/);
+    expect(await page.locator('#lines-figure svg title').textContent()).toMatch(/^Lines: Kestrow Plover/);
+    expect(await page.locator('#problems li').count()).toBe(0);
     await page.close();
   });
 
