@@ -6,6 +6,7 @@
  */
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
+import { SEA_WATER_DENSITY } from '../../core/common/constants.js';
 import { HULL_PLOTS, type HullPlot, type HullPlotParams } from '../../core/plots/plotCatalogue.js';
 import { HullModelSchema } from '../../core/hull/hullModel.js';
 import { answerNotModified, etagOf } from '../etag.js';
@@ -39,7 +40,7 @@ function paramsOf(q: Record<string, unknown>): HullPlotParams {
   return {
     ...(q['drafts'] === undefined ? {} : { drafts: q['drafts'] as number[] }),
     ...(q['draft'] === undefined ? {} : { draft: q['draft'] as number }),
-    density: (q['density'] as number | undefined) ?? 1.025,
+    density: (q['density'] as number | undefined) ?? SEA_WATER_DENSITY,
   };
 }
 
