@@ -83,7 +83,17 @@ beforeAll(async () => {
   const stored = await fetch(`${base}/v1/hulls?name=small%20box`, { method: 'POST', headers: { 'content-type': 'text/csv' }, body: boxCsv('small box', 10, 4, 2) });
   small = `?hull=${((await stored.json()) as { id: string }).id}`;
   profile = mkdtempSync(join(tmpdir(), 'halfbreadth-browser-'));
-  context = await chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: [...BROWSER_FLAGS], viewport: { width: 1280, height: 900 }, acceptDownloads: true });
+  // Signals are the test runner's to handle: playwright-core is not to install handlers of its own in this worker.
+  context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    headless: true,
+    args: [...BROWSER_FLAGS],
+    viewport: { width: 1280, height: 900 },
+    acceptDownloads: true,
+    handleSIGINT: false,
+    handleSIGTERM: false,
+    handleSIGHUP: false,
+  });
 });
 
 afterAll(async () => {
