@@ -166,14 +166,17 @@ describe('the page in a browser', () => {
   test('the controls are reached with Tab in reading order and work from the keyboard', async () => {
     const page = await openPage(1280, 900, small);
     await page.locator('body').focus();
-    const order: string[] = [];
-    for (let k = 0; k < 16; k++) {
-      await page.keyboard.press('Tab');
-      order.push(await page.evaluate(() => {
-        const a = document.activeElement as HTMLElement | null;
-        return a?.id || a?.getAttribute('href') || a?.textContent?.trim().slice(0, 30) || a?.tagName || '';
-      }));
-    }
+    // Each element that takes the focus is noted by the page itself, so the keys go in one stream.
+    await page.evaluate(() => {
+      const seen: string[] = [];
+      (window as unknown as { focusOrder: string[] }).focusOrder = seen;
+      document.addEventListener('focusin', (e) => {
+        const a = e.target as HTMLElement;
+        seen.push(a.id || a.getAttribute('href') || a.textContent?.trim().slice(0, 30) || a.tagName);
+      });
+    });
+    for (let k = 0; k < 16; k++) await page.keyboard.press('Tab');
+    const order = await page.evaluate(() => (window as unknown as { focusOrder: string[] }).focusOrder);
     // Every control has a label a screen reader reads, and every table header its scope.
     const unlabelled = await page.evaluate(() => Array.from(document.querySelectorAll('input, select')).filter((e) => (e as HTMLInputElement).labels?.length === 0).map((e) => e.id));
     expect(unlabelled).toEqual([]);
