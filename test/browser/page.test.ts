@@ -197,15 +197,24 @@ describe('the page in a browser', () => {
 
   test('a dropped file with an error shows it with its line and column; a sound file chosen next is shown', async () => {
     const page = await openPage(1280, 900, small);
-    const bad = readFileSync(join(ROOT, 'offsets-demo', 'workboat.csv'), 'utf8').replace('\n4.2,0.3,1.032,', '\n4.2,0.3,-1.032,');
-    expect(bad).toContain('-1.032');
-    const line = bad.split('\n').findIndex((l) => l.includes('-1.032')) + 1;
+    // The demo workboat with one half-breadth made negative: the first given one, at a
+    // waterline column (a numeric header), of the fifth station.
+    const lines = readFileSync(join(ROOT, 'offsets-demo', 'workboat.csv'), 'utf8').split('\n');
+    const headerAt = lines.findIndex((l) => l.startsWith('x,'));
+    const header = lines[headerAt]!.split(',');
+    const line = headerAt + 1 + 5;
+    const cells = lines[line - 1]!.split(',');
+    const column = cells.findIndex((c, k) => k > 0 && c !== '' && Number(header[k]) >= 0 && Number(c) > 0) + 1;
+    expect(column).toBeGreaterThan(1);
+    cells[column - 1] = `-${cells[column - 1]}`;
+    lines[line - 1] = cells.join(',');
+    const bad = lines.join('\n');
     await page.evaluate((text) => {
       const dt = new DataTransfer();
       dt.items.add(new File([text], 'bad.csv', { type: 'text/csv' }));
       document.getElementById('drop-zone')!.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
     }, bad);
-    await expect.poll(() => page.locator('#problems li').first().textContent()).toContain(`line ${line}, column 3`);
+    await expect.poll(() => page.locator('#problems li').first().textContent()).toContain(`line ${line}, column ${column}`);
     expect(await page.locator('#problems').getAttribute('role')).toBe('alert');
     expect(await page.locator('#lines-section').isHidden()).toBe(true);
     // A sound file in the points form, chosen with the file control: shown from the posted offsets.
