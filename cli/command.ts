@@ -38,5 +38,5 @@ export interface Command {
   run(args: CommandArgs, io: CliIo): Promise<number>;
 }
 
-/** Exit codes of the command line. */
-export const EXIT = { ok: 0, fault: 1, badInput: 2 } as const;
+/** Exit codes of the command line; 3: a program the command needs (a browser to print PDF) is not installed. */
+export const EXIT = { ok: 0, fault: 1, badInput: 2, missingProgram: 3 } as const;

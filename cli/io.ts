@@ -83,6 +83,8 @@ export function outputFault(e: unknown): string {
 export interface Input {
   readonly label: string;
   readonly text: string;
+  /** The bytes as read (the report prints their sha256). */
+  readonly bytes: Uint8Array;
 }
 
 /** The name standard input goes by in messages. */
@@ -106,7 +108,7 @@ export async function readInput(arg: string, io: CliIo): Promise<Input> {
     throw new HalfbreadthError([issue('HYD_BAD_ARGUMENT', ['file'], `cannot be read: ${why}`)]);
   }
   try {
-    return { label, text: utf8.decode(bytes) };
+    return { label, text: utf8.decode(bytes), bytes };
   } catch {
     throw new HalfbreadthError([issue('HYD_CSV_UNREADABLE', ['offsets'], 'the file is not UTF-8 text; save it as UTF-8 CSV')]);
   }

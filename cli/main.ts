@@ -12,6 +12,8 @@ import { processIo, STDIN_LABEL, type CliIo } from './io.js';
 import { printIssues } from './printIssues.js';
 
 const PROGRAM = 'halfbreadth';
+/** The positional that names the offsets file, whose name heads the issues printed. */
+const FILE_POSITIONAL = '<file|->';
 
 export function mainHelp(): string {
   const w = Math.max(...COMMANDS.map((c) => c.name.length));
@@ -106,7 +108,8 @@ export function parseCommandArgs(c: Command, args: readonly string[]): CommandAr
     // A value-less option may have swallowed the next word; counting positionals then misleads.
     if (!valueMissing) {
       c.positionals.slice(positionals.length).forEach((name) => {
-        issues.push(bad('argv', `missing ${name}: give an offsets CSV file, or - to read standard input`));
+        const what = name === FILE_POSITIONAL ? 'give an offsets CSV file, or - to read standard input' : `see '${PROGRAM} ${c.name} --help'`;
+        issues.push(bad('argv', `missing ${name}: ${what}`));
       });
       positionals.slice(c.positionals.length).forEach((extra) => issues.push(bad('argv', `unexpected argument '${extra}'; ${see}`)));
     }
@@ -143,7 +146,8 @@ export async function main(argv: readonly string[], io: CliIo = processIo()): Pr
       io.stdout.write(commandHelp(c));
       return EXIT.ok;
     }
-    const file = args.positionals[0];
+    const at = c.positionals.indexOf(FILE_POSITIONAL);
+    const file = args.positionals[at < 0 ? 0 : at];
     fileLabel = file === undefined ? undefined : file === '-' ? STDIN_LABEL : file;
     return await c.run(args, io);
   } catch (e) {

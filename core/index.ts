@@ -1,6 +1,6 @@
 /**
  * The pure computational core of Halfbreadth: no file, network or process I/O.
- * Folders are layers, lowest first: common, quadrature, hull, offsets, fairness, upright, report (stability, when it comes, sits
+ * Folders are layers, lowest first: common, quadrature, hull, offsets, fairness, upright, report, plots, document (stability, when it comes, sits
  * between upright and report). A file imports only from its own folder or a lower one;
  * test/architecture/layering.test.ts keeps it so.
  */
@@ -11,3 +11,5 @@ export * from './offsets/index.js';
 export * from './fairness/index.js';
 export * from './upright/index.js';
 export * from './report/index.js';
+export * from './plots/index.js';
+export * from './document/index.js';

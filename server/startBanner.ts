@@ -18,7 +18,11 @@ function workingDrafts(lowestKeel: number, lowestDeck: number): number[] {
 }
 
 export function startBanner(store: HullStore, ids: readonly string[], baseUrl: string): string {
-  const lines: string[] = [`Halfbreadth is serving on ${baseUrl}  (API: ${baseUrl}/docs)`, ''];
+  const lines: string[] = [
+    `Halfbreadth is serving on ${baseUrl}  (API: ${baseUrl}/docs)`,
+    `Open ${baseUrl}/ in a browser to see a hull's lines, hydrostatics and curves.`,
+    '',
+  ];
   let shown = false;
   for (const id of ids) {
     const hull = store.get(id);

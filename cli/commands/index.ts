@@ -7,9 +7,11 @@ import { areas } from './areas.js';
 import { bonjean } from './bonjean.js';
 import { check } from './check.js';
 import { hydrostatics } from './hydrostatics.js';
+import { plot } from './plot.js';
+import { report } from './report.js';
 import { sheet } from './sheet.js';
 
-export const COMMANDS: readonly Command[] = [hydrostatics, sheet, bonjean, areas, check];
+export const COMMANDS: readonly Command[] = [hydrostatics, sheet, bonjean, areas, check, plot, report];
 
 export function findCommand(name: string): Command | undefined {
   return COMMANDS.find((c) => c.name === name);

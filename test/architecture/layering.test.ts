@@ -9,10 +9,10 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, test } from 'vitest';
 
 /** core/'s folders, lowest layer first. `stability` is reserved for the stability work. */
-const LAYERS = ['common', 'quadrature', 'hull', 'offsets', 'fairness', 'upright', 'stability', 'report'] as const;
+const LAYERS = ['common', 'quadrature', 'hull', 'offsets', 'fairness', 'upright', 'stability', 'report', 'plots', 'document'] as const;
 
 /** Packages core/ may use: all pure computation or parsing (no file, network or process access). */
-const ALLOWED_PACKAGES = new Set(['zod', 'papaparse', 'mathjs']);
+const ALLOWED_PACKAGES = new Set(['zod', 'papaparse', 'mathjs', 'd3-array', 'd3-scale', 'd3-shape']);
 
 const CORE = fileURLToPath(new URL('../../core/', import.meta.url));
 
