@@ -139,8 +139,9 @@ export class HullStore {
       model: db.prepare<[string], MetaRow & { model: string }>(`SELECT ${META_COLUMNS}, model FROM hulls WHERE id = ?`),
       source: db.prepare<[string], { media_type: string; source: Buffer }>('SELECT media_type, source FROM hulls WHERE id = ?'),
       modelText: db.prepare<[string], { model: string }>('SELECT model FROM hulls WHERE id = ?'),
-      list: db.prepare<[], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls ORDER BY created, id`),
-      byHash: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE source_hash = ? ORDER BY created, id`),
+      // Oldest first; hulls stored within the same millisecond in the order they were stored.
+      list: db.prepare<[], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls ORDER BY created, rowid`),
+      byHash: db.prepare<[string], MetaRow>(`SELECT ${META_COLUMNS} FROM hulls WHERE source_hash = ? ORDER BY created, rowid`),
       count: db.prepare<[], { n: number }>('SELECT count(*) AS n FROM hulls'),
     };
   }

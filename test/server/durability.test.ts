@@ -23,8 +23,8 @@ import { readHullJson } from '../../core/offsets/readHullJson.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { STORE_FILE } from '../../server/store/hullStore.js';
 
-// Twenty kills in CI; five in a local run, which still kills mid-write every time.
-const ROUNDS = process.env.CI ? 20 : 5;
+// Twenty kills in CI; three in a local run, which still kills mid-write every time.
+const ROUNDS = process.env.CI ? 20 : 3;
 const dir = mkdtempSync(join(tmpdir(), 'halfbreadth-durability-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
