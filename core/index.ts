@@ -1,8 +1,8 @@
 /**
  * The pure computational core of Halfbreadth: no file, network or process I/O.
- * Folders are layers, lowest first: common, quadrature, hull, offsets, fairness, upright, report, plots, document (stability, when it comes, sits
- * between upright and report). A file imports only from its own folder or a lower one;
- * test/architecture/layering.test.ts keeps it so.
+ * Folders are layers, lowest first: common, quadrature, hull, offsets, fairness, upright,
+ * stability, report, plots, document. A file imports only from its own folder or a lower
+ * one; test/architecture/layering.test.ts keeps it so.
  */
 export * from './common/index.js';
 export * from './quadrature/index.js';
@@ -10,6 +10,7 @@ export * from './hull/index.js';
 export * from './offsets/index.js';
 export * from './fairness/index.js';
 export * from './upright/index.js';
+export * from './stability/index.js';
 export * from './report/index.js';
 export * from './plots/index.js';
 export * from './document/index.js';

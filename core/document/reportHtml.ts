@@ -28,7 +28,7 @@ import { linesPlot } from '../plots/linesPlot.js';
 import { defaultDrafts } from '../plots/plotCatalogue.js';
 import { short, unitText } from '../plots/scaleText.js';
 import { sectionalAreaPlot } from '../plots/sectionalAreaPlot.js';
-import type { CrossCurveRow, GzResult } from '../plots/stabilityShapes.js';
+import type { CrossCurvePoint as CrossCurveRow, GzCurve as GzResult } from '../plots/stabilityShapes.js';
 import { esc } from '../plots/svg.js';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;

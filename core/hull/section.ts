@@ -294,6 +294,16 @@ export class Section {
   }
 
   /**
+   * The fitted pieces of the starboard half-section, keel up: for piece i, y and z are
+   * the cubics with coefficients cy[4i..4i+3] and cz[4i..4i+3] in u (monomials), for u
+   * from 0 to span[i]. Read-only views, for the whole-section boundary of
+   * core/hull/sectionBoundary.ts.
+   */
+  pieces(): { readonly count: number; readonly span: Float64Array; readonly cy: Float64Array; readonly cz: Float64Array } {
+    return { count: this.pieceCount, span: this.span, cy: this.cy, cz: this.cz };
+  }
+
+  /**
    * Set the wetted-surface slope factor at each point (1 = the surface runs square to
    * the section), for the run above each point and for the run below it (the same
    * unless the point is a knuckle); between points the factor is read linearly along

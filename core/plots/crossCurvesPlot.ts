@@ -8,7 +8,7 @@ import { xyFrame } from './axes.js';
 import { legendRows } from './legend.js';
 import { short } from './scaleText.js';
 import { curveStroke, el, INK, plotDocument, text } from './svg.js';
-import type { CrossCurveRow } from './stabilityShapes.js';
+import type { CrossCurvePoint as CrossCurveRow } from './stabilityShapes.js';
 
 export interface CrossCurvesPlotData {
   readonly name: string;

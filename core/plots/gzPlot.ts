@@ -14,7 +14,7 @@ import { area, curveMonotoneX, line } from 'd3-shape';
 import { xyFrame } from './axes.js';
 import { short, unitText } from './scaleText.js';
 import { el, INK, plotDocument, text } from './svg.js';
-import type { CriterionResult, GzResult } from './stabilityShapes.js';
+import type { CriterionVerdict as CriterionResult, GzCurve as GzResult } from './stabilityShapes.js';
 
 /** One radian, in degrees: where the tangent at the origin reaches GM0. */
 export const RADIAN_DEG = 180 / Math.PI;

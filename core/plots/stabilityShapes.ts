@@ -1,18 +1,13 @@
 /**
- * The shapes of stability results that the stability plots draw, as the project's
- * conventions name their fields: cross-curve rows and a righting-lever (GZ) result with
- * its criteria. Plain data, so the plots need nothing from the computation that made it.
+ * The parts of the stability results (core/stability/) that the stability plots draw,
+ * with the conventions' field names: cross-curve rows and a righting-lever (GZ) result
+ * with its criteria. A plot asks only for what it draws, so a test can hand it a curve
+ * made from a formula.
  */
+import type { CriterionResult, CrossCurveRow, GzResult } from '../stability/index.js';
 
 /** One point of the cross curves: KN at a displacement and heel. */
-export interface CrossCurveRow {
-  /** t */
-  readonly displacement: number;
-  /** degrees */
-  readonly heel: number;
-  /** m */
-  readonly kn: number;
-}
+export type CrossCurvePoint = Pick<CrossCurveRow, 'displacement' | 'heel' | 'kn'>;
 
 export interface GzPoint {
   /** degrees */
@@ -22,23 +17,11 @@ export interface GzPoint {
 }
 
 /** One criterion's verdict, e.g. { id: 'area-0-30', required: 0.055, actual: 0.08, unit: 'm.rad', pass: true }. */
-export interface CriterionResult {
-  readonly id: string;
-  readonly required: number;
-  readonly actual: number;
-  readonly unit: string;
-  readonly pass: boolean;
-}
+export type CriterionVerdict = Omit<CriterionResult, 'id'> & { readonly id: string };
 
-/** The righting levers of a loading. Angles in degrees, lengths in m. */
-export interface GzResult {
-  readonly gm0: number;
-  readonly points: readonly GzPoint[];
-  readonly maxGz: number;
-  readonly angleOfMaxGz: number;
-  /** The heel beyond the maximum where GZ returns to zero; null when it does not within the heels computed. */
-  readonly vanishingAngle?: number | null;
-  /** The first heel at which an opening reaches the waterline; null or absent when no opening is given. */
-  readonly downfloodingAngle?: number | null;
-  readonly criteria: readonly CriterionResult[];
-}
+/** The righting levers of a loading as a plot draws them. Angles in degrees, lengths in m. */
+export type GzCurve = Pick<GzResult, 'gm0' | 'maxGz' | 'angleOfMaxGz'> &
+  Partial<Pick<GzResult, 'vanishingAngle' | 'downfloodingAngle'>> & {
+    readonly points: readonly GzPoint[];
+    readonly criteria: readonly CriterionVerdict[];
+  };

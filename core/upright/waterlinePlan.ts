@@ -158,18 +158,18 @@ export interface PlanOptions {
   readonly pieces?: boolean;
 }
 
-/** The runs of consecutive stations whose keel lies below `draft`. */
-function immersedRuns(keel: Float64Array, draft: number): [number, number][] {
+/** The runs of consecutive stations with a positive depth (immersed). */
+function immersedRuns(depth: ArrayLike<number>): [number, number][] {
   const runs: [number, number][] = [];
-  const n = keel.length;
+  const n = depth.length;
   let i = 0;
   while (i < n) {
-    if (!(keel[i]! < draft)) {
+    if (!(depth[i]! > 0)) {
       i++;
       continue;
     }
     const a = i;
-    while (i + 1 < n && keel[i + 1]! < draft) i++;
+    while (i + 1 < n && depth[i + 1]! > 0) i++;
     runs.push([a, i]);
     i++;
   }
@@ -181,9 +181,23 @@ function immersedRuns(keel: Float64Array, draft: number): [number, number][] {
  * every keel gives an empty plan.
  */
 export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptions = {}): WaterlinePlan {
-  const { x, keel } = p;
+  const depth = new Array<number>(p.x.length);
+  for (let i = 0; i < depth.length; i++) depth[i] = draft - p.keel[i]!;
+  return planOfDepths(p, depth, draft, options);
+}
+
+/**
+ * The plan for any waterline, given by how deep below it each station's lowest point
+ * lies (`depth[i]`, positive when the station is immersed): an end between a wet station
+ * and a dry one lies where the depth, read straight between them, is zero. For a level
+ * waterline the depth is the draft less the keel height, and the end is where the
+ * straight keel line crosses the waterline. `draft` is the level waterline's, kept in the
+ * plan for its readers (NaN for an inclined one).
+ */
+export function planOfDepths(p: PreparedHull, depth: ArrayLike<number>, draft: number, options: PlanOptions = {}): WaterlinePlan {
+  const { x } = p;
   const n = x.length;
-  const runs = immersedRuns(keel, draft);
+  const runs = immersedRuns(depth);
   // Every station immersed: the plan does not depend on the draft (no end pieces), so it
   // is made once and shared, which spares most of a table's allocation.
   const whole = runs.length === 1 && runs[0]![0] === 0 && runs[0]![1] === n - 1 && options.pieces !== true;
@@ -217,7 +231,7 @@ export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptio
     let aftPiece = 0;
     let kAftEnd = -1;
     if (a > 0) {
-      const t = (draft - keel[a]!) / (keel[a - 1]! - keel[a]!); // fraction from station a toward a - 1
+      const t = depth[a]! / (depth[a]! - depth[a - 1]!); // fraction from station a toward a - 1
       const xEnd = x[a]! + (x[a - 1]! - x[a]!) * t;
       ends.push({ x: xEnd, side: 'aft', between: [a - 1, a] });
       aftPiece = x[a]! - xEnd;
@@ -259,7 +273,7 @@ export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptio
     // Forward end.
     let kFwdEnd = -1;
     if (b < n - 1) {
-      const t = (draft - keel[b]!) / (keel[b + 1]! - keel[b]!);
+      const t = depth[b]! / (depth[b]! - depth[b + 1]!);
       const xEnd = x[b]! + (x[b + 1]! - x[b]!) * t;
       ends.push({ x: xEnd, side: 'fwd', between: [b, b + 1] });
       const len = xEnd - x[b]!;

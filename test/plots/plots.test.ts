@@ -30,7 +30,7 @@ import { linesData } from '../../core/plots/linesData.js';
 import { linesPlot } from '../../core/plots/linesPlot.js';
 import { HULL_PLOTS } from '../../core/plots/plotCatalogue.js';
 import { sectionalAreaPlot } from '../../core/plots/sectionalAreaPlot.js';
-import type { CriterionResult, GzResult } from '../../core/plots/stabilityShapes.js';
+import type { CriterionVerdict as CriterionResult, GzCurve as GzResult } from '../../core/plots/stabilityShapes.js';
 import { bonjean } from '../../core/upright/bonjean.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';

@@ -1,0 +1,137 @@
+/**
+ * The floating position for a load: the draft at the perpendiculars, the trim and the heel
+ * at which the hull floats a displacement with its centre of gravity at (LCG, TCG, KG).
+ *
+ * Balance: the immersed volume is Δ / ρ, and the centre of buoyancy B lies on the vertical
+ * through the centre of gravity G, that is (B - G) × n = 0 with n the waterplane's upward
+ * normal (core/stability/inclinedHydrostatics.ts). Two components of that product and
+ * the volume are three equations in the waterplane's h, trim angle τ and heel φ; they are
+ * solved by Newton's method with the Jacobian by differences, each step's volume met
+ * exactly first (core/stability/solveVolume.ts). With the centre of gravity on the
+ * centreline (TCG 0) a hull symmetric about it floats upright, and only h and τ are
+ * sought. Without a KG the vertical through G is taken to pass through B's height, so the
+ * balance along the length is LCB = LCG in the hull's frame, the usual way of trimming a
+ * hull by its hydrostatics (common practice, no source); a TCG heels the hull by an
+ * amount that depends on KG, so a TCG needs one.
+ *
+ * Reference: E. C. Tupper, Introduction to Naval Architecture, 5th ed. (2013), ch. 4
+ * (trim and list; from memory).
+ */
+import { fail } from '../common/errors.js';
+import type { PreparedHull } from '../hull/preparedHull.js';
+import { draftAtX, type InclinedValues, type Waterplane } from './inclinedHydrostatics.js';
+import { checkVolume, floatAt } from './solveVolume.js';
+import { levelDraftFor } from './levelDrafts.js';
+
+export interface Load {
+  /** t */
+  readonly displacement: number;
+  /** x of the centre of gravity, m. */
+  readonly lcg: number;
+  /** y of the centre of gravity, m (starboard positive); 0 by default. */
+  readonly tcg?: number;
+  /** Height of the centre of gravity above the baseline, m; needed with a TCG. */
+  readonly kg?: number;
+}
+
+export interface FloatingPosition {
+  readonly displacement: number;
+  readonly lcg: number;
+  readonly tcg: number;
+  readonly kg: number | null;
+  readonly draftAft: number;
+  readonly draftFwd: number;
+  /** draftAft - draftFwd, m (positive by the stern). */
+  readonly trim: number;
+  /** Degrees, starboard down positive. */
+  readonly heel: number;
+  /** Draft at amidships, m. */
+  readonly draft: number;
+  /** The centre of buoyancy at the solution, m. */
+  readonly lcb: number;
+  readonly tcb: number;
+  readonly vcb: number;
+  /** What is left of the balance: volume (m³) and the horizontal distances between the verticals through B and G along and across the waterplane (m). */
+  readonly residuals: { readonly volume: number; readonly longitudinal: number; readonly transverse: number };
+}
+
+/** The horizontal offsets of B from G's vertical, along e1 (length) and e2 (across) of the waterplane. */
+function offsets(v: InclinedValues, w: Waterplane, g: { x: number; y: number; z: number }): [number, number] {
+  const sin = Math.sin(w.heel);
+  const cos = Math.cos(w.heel);
+  const sinT = Math.sin(w.trimAngle);
+  const cosT = Math.cos(w.trimAngle);
+  const bx = v.xB - g.x;
+  const by = v.yB - g.y;
+  const bz = v.zB - g.z;
+  // e1 = (cos τ, sin φ sin τ, -cos φ sin τ), e2 = (0, cos φ, sin φ): B - G has no part
+  // along either when it lies along n.
+  return [bx * cosT + by * sin * sinT - bz * cos * sinT, by * cos + bz * sin];
+}
+
+export function floatingPosition(p: PreparedHull, load: Load, density: number): FloatingPosition {
+  const volume = checkVolume(p, load.displacement, density, ['displacement']);
+  const tcg = load.tcg ?? 0;
+  if (tcg !== 0 && load.kg === undefined) {
+    fail('HYD_BAD_ARGUMENT', ['kg'], `a TCG of ${tcg} m heels the hull by an amount that depends on the height of G: give KG as well`);
+  }
+  const lbp = p.perp.lbp;
+  // Start level at the draft that floats the volume.
+  const d0 = levelDraftFor(p, volume);
+  let state = { h: d0, tau: 0, phi: 0 };
+  let fl = floatAt(p, volume, 0, 0, d0);
+  const gOf = (v: InclinedValues): { x: number; y: number; z: number } => ({ x: load.lcg, y: tcg, z: load.kg ?? v.zB });
+  const heeling = tcg !== 0;
+  const solveAt = (tau: number, phi: number, hStart: number) => floatAt(p, volume, phi, tau, hStart);
+  const tol = 1e-9 * lbp;
+  for (let it = 0; it < 50; it++) {
+    const [r1, r2] = offsets(fl.values, fl.plane, gOf(fl.values));
+    if (Math.abs(r1) <= tol && (!heeling || Math.abs(r2) <= tol)) break;
+    // Jacobian of the offsets in (τ, φ), by forward differences with the volume kept.
+    const dTau = 1e-6;
+    const aT = solveAt(state.tau + dTau, state.phi, fl.plane.h);
+    const [t1, t2] = offsets(aT.values, aT.plane, gOf(aT.values));
+    let stepTau: number;
+    let stepPhi = 0;
+    if (!heeling) {
+      const d = (t1 - r1) / dTau;
+      stepTau = d !== 0 ? -r1 / d : 0;
+    } else {
+      const dPhi = 1e-6;
+      const aP = solveAt(state.tau, state.phi + dPhi, fl.plane.h);
+      const [p1, p2] = offsets(aP.values, aP.plane, gOf(aP.values));
+      const j11 = (t1 - r1) / dTau;
+      const j21 = (t2 - r2) / dTau;
+      const j12 = (p1 - r1) / dPhi;
+      const j22 = (p2 - r2) / dPhi;
+      const det = j11 * j22 - j12 * j21;
+      if (det === 0) break;
+      stepTau = (-r1 * j22 + r2 * j12) / det;
+      stepPhi = (-j11 * r2 + j21 * r1) / det;
+    }
+    // Keep steps within reason: a trim angle under 30 degrees, a heel change under 20.
+    stepTau = Math.max(-0.5, Math.min(0.5, stepTau));
+    stepPhi = Math.max(-0.35, Math.min(0.35, stepPhi));
+    state = { h: fl.plane.h, tau: state.tau + stepTau, phi: state.phi + stepPhi };
+    fl = solveAt(state.tau, state.phi, state.h);
+  }
+  const [r1, r2] = offsets(fl.values, fl.plane, gOf(fl.values));
+  const w = fl.plane;
+  const draftAft = draftAtX(w, p.perp.ap);
+  const draftFwd = draftAtX(w, p.perp.fp);
+  return {
+    displacement: load.displacement,
+    lcg: load.lcg,
+    tcg,
+    kg: load.kg ?? null,
+    draftAft,
+    draftFwd,
+    trim: draftAft - draftFwd,
+    heel: (w.heel * 180) / Math.PI,
+    draft: draftAtX(w, p.perp.xm),
+    lcb: fl.values.xB,
+    tcb: fl.values.yB,
+    vcb: fl.values.zB,
+    residuals: { volume: fl.values.volume - volume, longitudinal: r1, transverse: r2 },
+  };
+}
