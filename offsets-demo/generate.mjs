@@ -217,8 +217,9 @@ function boatTable() {
     // millimetre of tolerance) up to the deck edge; below that the station has no surface.
     const cells = WATERLINES.map((z) => (z >= mm(zk) && z <= boat.deck ? mm(boat.halfBreadth(x, z)) : null));
     // The keel (rabbet) height of every station, as a table of offsets gives it: where it
-    // falls on a tabulated waterline it confirms the flat of keel there.
-    return { x, keel: mm(zk), cells };
+    // falls on a tabulated waterline it confirms the flat of keel there. The deck edge is
+    // the top waterline, 2.2 m, at every station: given too, so that heeled work can rely on it.
+    return { x, keel: mm(zk), deckZ: boat.deck, deckY: mm(boat.halfBreadth(x, boat.deck)), cells };
   });
 }
 
@@ -236,12 +237,15 @@ function checkGrid(waterlines, rows, label) {
     for (let k = first; k <= last; k++) check(defined[k], `${label}: blank inside the row at station ${x}`);
     for (const c of cells) if (c !== null) check(Number.isFinite(c) && c >= 0, `${label}: half-breadth >= 0 at station ${x}`);
     check(rows[i].keel <= waterlines[first], `${label}: keel at or below the lowest half-breadth at station ${x}`);
+    check(rows[i].deckZ === waterlines[last] && rows[i].deckY === cells[last], `${label}: the deck edge is the top cell at station ${x}`);
   }
 }
 
 function gridCsv(meta, waterlines, rows, fmt) {
-  const lines = [...meta, ['x', 'keel_z', ...waterlines.map(fmt)].join(',')];
-  for (const { x, keel, cells } of rows) lines.push([fmt(x), fmt(keel), ...cells.map((c) => (c === null ? '' : fmt(c)))].join(','));
+  const lines = [...meta, ['x', 'keel_z', 'deck_z', 'deck_y', ...waterlines.map(fmt)].join(',')];
+  for (const { x, keel, deckZ, deckY, cells } of rows) {
+    lines.push([fmt(x), fmt(keel), fmt(deckZ), fmt(deckY), ...cells.map((c) => (c === null ? '' : fmt(c)))].join(','));
+  }
   return lines.join('\n') + '\n';
 }
 
@@ -289,7 +293,7 @@ checkGrid(WATERLINES, rows, 'workboat');
 // The imperial table keeps its order after rounding to sixteenths.
 const wlSixteenths = WATERLINES.map((z) => sixteenths(ftIn8(z)));
 const xSixteenths = rows.map((r) => sixteenths(ftIn8(r.x)));
-checkGrid(wlSixteenths, rows.map((r, i) => ({ x: xSixteenths[i], keel: sixteenths(ftIn8(r.keel)), cells: r.cells })), 'workboat-ftin');
+checkGrid(wlSixteenths, rows.map((r, i) => ({ x: xSixteenths[i], keel: sixteenths(ftIn8(r.keel)), deckZ: sixteenths(ftIn8(r.deckZ)), deckY: r.deckY, cells: r.cells })), 'workboat-ftin');
 
 const boatMeta = (units, ap, fp) => [
   '# name: Kestrow Mule - 14 m steel workboat (invented demo hull)',

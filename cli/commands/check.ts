@@ -6,7 +6,7 @@
 import { CAUTION } from '../../core/common/caution.js';
 import { HalfbreadthError, type Issue } from '../../core/common/errors.js';
 import { fairnessWarnings } from '../../core/fairness/fairness.js';
-import { proportionWarnings } from '../../core/offsets/readingWarnings.js';
+import { checkWarnings, proportionWarnings } from '../../core/offsets/readingWarnings.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv, type ReadResult } from '../../core/offsets/readOffsets.js';
@@ -30,7 +30,7 @@ export interface Warning {
  * (core/fairness/fairness.ts; each warning also gives x, z, value and a suggested value).
  */
 export const WARNING_CHECKS: readonly ((read: ReadResult) => readonly Warning[])[] = [
-  (read) => read.notes,
+  (read) => checkWarnings(read.notes),
   (read) => proportionWarnings(read.hull, read.units),
   (read) => fairnessWarnings(read.hull),
 ];

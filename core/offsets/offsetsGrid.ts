@@ -16,7 +16,7 @@ import type { Point, Station } from '../hull/hullModel.js';
 import { LIMITS } from '../common/limits.js';
 import { readLength } from './lengthCell.js';
 import { csvIssue } from './offsetsIssue.js';
-import { keelAtWaterlineWarning, type ReadingWarning } from './readingWarnings.js';
+import { deckAtTopWaterlineWarning, keelAtWaterlineWarning, type ReadingWarning } from './readingWarnings.js';
 import { cellText, type BodyRead, type Sheet } from './offsetsSheet.js';
 
 /** The optional columns of the grid form, in the order they may appear. */
@@ -156,6 +156,10 @@ export function readGridBody(sheet: Sheet, head: Pick<GridHeader, 'waterlines' |
     const lowest = points[0];
     if (keelZ === undefined && lowest !== undefined && lowest.y > 0 && lowest.z > waterlines[0]!) {
       notes.push(keelAtWaterlineWarning(i, xv * factor, lowest.z, lowest.y, line));
+    }
+    const highest = points[points.length - 1];
+    if (deckZ === undefined && highest !== undefined && highest.z === waterlines[waterlines.length - 1]) {
+      notes.push(deckAtTopWaterlineWarning(i, xv * factor, highest.z, line));
     }
     addKeelAndDeck(points, cols, { keelZ, deckZ, deckY, extra, line, where, issues, label });
     stations.push({ x: xv * factor, points });

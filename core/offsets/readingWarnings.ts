@@ -9,6 +9,11 @@
  *   `keel_z` column of the grid form says where it is; given equal to the lowest cell's
  *   height it confirms the flat and the warning is not given. The grid reader
  *   (core/offsets/offsetsGrid.ts) finds these, as only it knows which cells were given.
+ * - HYD_DECK_AT_TOP_WATERLINE: a grid row whose highest defined half-breadth is on the
+ *   table's top waterline, with no deck_z given: the table may simply stop there, below
+ *   the deck edge. Upright work to that height does not care; heeled work does (deck
+ *   immersion), and refuses such a table (core/stability/stabilityInput.ts) until deck_z
+ *   and deck_y say where the deck edge is.
  * - HYD_PROPORTIONS: dimensions no vessel has, which usually mean the wrong unit (an
  *   offsets table in millimetres or inches read as metres) or columns swapped: a
  *   length between perpendiculars over 400 m (the largest ships are about that long),
@@ -19,9 +24,11 @@ import { perpendiculars, type HullModel } from '../hull/hullModel.js';
 import { lengthFactor, type LengthUnit } from '../common/units.js';
 
 export interface ReadingWarning {
-  readonly code: 'HYD_KEEL_AT_WATERLINE' | 'HYD_PROPORTIONS';
+  readonly code: 'HYD_KEEL_AT_WATERLINE' | 'HYD_DECK_AT_TOP_WATERLINE' | 'HYD_PROPORTIONS';
   readonly path: readonly (string | number)[];
   readonly message: string;
+  /** The station (index in the hull model) a note is about, where it is about one. */
+  readonly station?: number;
 }
 
 /** The longest plausible length between perpendiculars, m (about the largest ships). Common practice, no source. */
@@ -41,6 +48,28 @@ export function keelAtWaterlineWarning(station: number, x: number, z: number, y:
       `line ${line}, station x = ${m3(x)} m: the keel is taken at WL ${m3(z)} m, the lowest waterline with an offset, with a flat of ` +
       `bottom ${m3(y)} m wide each side; if the keel lies lower, between waterlines, give its height in a keel_z column (station ${station + 1})`,
   };
+}
+
+/** The note for a grid row whose top is the table's top waterline, with no deck edge given. */
+export function deckAtTopWaterlineWarning(station: number, x: number, z: number, line: number): ReadingWarning {
+  return {
+    code: 'HYD_DECK_AT_TOP_WATERLINE',
+    path: ['offsets', line],
+    station,
+    message:
+      `line ${line}, station x = ${m3(x)} m: the section ends at the table's top waterline (${m3(z)} m) with no deck_z; ` +
+      `it is taken as the deck edge, which upright work below it does not need, but heeled work does: give deck_z and deck_y`,
+  };
+}
+
+/** The notes that `check` shows as warnings: all but the deck edges at the top waterline, which only heeled work needs and which it names itself. */
+export function checkWarnings(notes: readonly ReadingWarning[]): ReadingWarning[] {
+  return notes.filter((n) => n.code !== 'HYD_DECK_AT_TOP_WATERLINE');
+}
+
+/** The stations whose deck edges the notes say are not given. */
+export function deckAssumedAt(notes: readonly ReadingWarning[]): number[] {
+  return notes.filter((n) => n.code === 'HYD_DECK_AT_TOP_WATERLINE' && n.station !== undefined).map((n) => n.station!);
 }
 
 /** Dimensions that suggest the wrong unit or swapped columns (see the module note). `units` is the file's. */

@@ -8,7 +8,7 @@ import { z } from 'zod';
 import { CAUTION } from '../../core/common/caution.js';
 import type { HalfbreadthError } from '../../core/common/errors.js';
 import { fairnessWarnings, type FairnessWarning } from '../../core/fairness/fairness.js';
-import { proportionWarnings, type ReadingWarning } from '../../core/offsets/readingWarnings.js';
+import { checkWarnings, proportionWarnings, type ReadingWarning } from '../../core/offsets/readingWarnings.js';
 import { hullSummary, type HullSummary } from '../../core/report/formatHydrostatics.js';
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
 import type { LoadedHull } from '../hullInput.js';
@@ -44,7 +44,7 @@ const FairnessWarningSchema = z
 const ReadingWarningSchema = z
   .object({
     code: z.enum(['HYD_KEEL_AT_WATERLINE', 'HYD_PROPORTIONS']),
-    path: z.array(z.union([z.string(), z.number()])).describe('where in the hull model'),
+    path: z.array(z.union([z.string(), z.number()])).describe('where in the offsets file (line) or the hull model'),
     message: z.string(),
   })
   .describe('how the table is written: a keel taken at a tabulated waterline, or proportions that suggest the wrong unit or swapped columns');
@@ -99,7 +99,7 @@ export const check: Computation<Record<string, never>, CheckResult> = {
     hull: hullSummary(h.hull),
     particulars: particulars(h),
     issues: [],
-    warnings: [...h.notes(), ...proportionWarnings(h.hull, h.units), ...fairnessWarnings(h.hull)],
+    warnings: [...checkWarnings(h.notes()), ...proportionWarnings(h.hull, h.units), ...fairnessWarnings(h.hull)],
     caution: CAUTION,
   }),
   invalid: (err: HalfbreadthError) => ({

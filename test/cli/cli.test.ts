@@ -275,9 +275,9 @@ describe('bad input', () => {
 
   test('every draft outside the hull is named, and nothing is written to stdout', async () => {
     // The workboat's baseline is z = 0 and its deck edge z = 2.2 m (its own header row,
-    // whose cells after x and keel_z are the waterline heights).
+    // whose cells after x and the named columns are the waterline heights).
     const header = readFileSync(WORKBOAT, 'utf8').split('\n').find((l) => l.startsWith('x,'))!;
-    const top = Math.max(...header.split(',').slice(2).map(Number));
+    const top = Math.max(...header.split(',').slice(1).filter((c) => !/^[a-z_]+$/.test(c)).map(Number));
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', `0,1,${top + 0.5},${top + 1}`]);
     expect(r.code).toBe(2);
     expect(r.out).toBe('');
@@ -408,16 +408,17 @@ describe('check', () => {
     expect(j.errors).toEqual([]);
     expect(j.warnings).toEqual([]);
     expect(j.caution).toBe(CAUTION);
-    // The header is x, keel_z, then the waterline heights (the conventions' grid form).
+    // The header is x, keel_z, deck_z, deck_y, then the waterline heights (the conventions' grid form).
     const header = readFileSync(WORKBOAT, 'utf8').split('\n').find((l) => l.startsWith('x,'))!.split(',');
-    expect(header[1]).toBe('keel_z');
-    const heights = header.slice(2).map(Number);
+    expect(header.slice(1, 4)).toEqual(['keel_z', 'deck_z', 'deck_y']);
+    const first = 4;
+    const heights = header.slice(first).map(Number);
     const ap = Number(metadata(WORKBOAT, 'ap'));
     const fp = Number(metadata(WORKBOAT, 'fp'));
     const rows = dataLines(WORKBOAT).map((l) => l.split(','));
     // A point per defined half-breadth, and one more where the keel lies below the lowest of them.
     const points = rows.reduce((n, cells) => {
-      const defined = cells.slice(2).map((c, k) => (c.trim() === '' ? undefined : heights[k]!)).filter((z) => z !== undefined);
+      const defined = cells.slice(first).map((c, k) => (c.trim() === '' ? undefined : heights[k]!)).filter((z) => z !== undefined);
       return n + defined.length + (Number(cells[1]) < Math.min(...defined) ? 1 : 0);
     }, 0);
     expect(j.particulars).toMatchObject({
