@@ -1,0 +1,116 @@
+/**
+ * The floating position for a load and the level drafts of displacements
+ * (core/stability/floatingPosition.ts, core/stability/levelDrafts.ts).
+ *
+ * Sources:
+ * - A box barge trimmed: its waterplane and sections are rectangles, so with the waterline
+ *   from draft dA at x = 0 to dF at x = L the volume is B L (dA + dF)/2 and the LCB is the
+ *   centroid of the trapezium, L (dA + 2 dF) / (3 (dA + dF)) (elementary geometry). With no
+ *   KG the balance along the length is LCB = LCG, so dA + dF = 2T and dA + 2 dF = 6 T LCG / L.
+ * - Small trims: tan θ = (LCB - LCG) / GML, the trimming moment over the moment to trim
+ *   (E. C. Tupper, Introduction to Naval Architecture, 5th ed., 2013, ch. 4; from memory).
+ * - Any hull: the balance itself (B on the vertical through G, the volume Δ/ρ), checked here
+ *   from the solution's own centre of buoyancy and waterplane.
+ */
+import { readFileSync } from 'node:fs';
+import { describe, expect, test } from 'vitest';
+import { isHalfbreadthError } from '../../core/common/errors.js';
+import type { HullModel } from '../../core/hull/hullModel.js';
+import { prepareHull } from '../../core/hull/preparedHull.js';
+import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { floatingPosition } from '../../core/stability/floatingPosition.js';
+import { inclinedHydrostatics, waterplaneOf } from '../../core/stability/inclinedHydrostatics.js';
+import { draftsForDisplacements } from '../../core/stability/levelDrafts.js';
+import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
+import { boxBarge } from '../fixtures/hulls.js';
+import '../helpers/relClose.js';
+
+const demo = (file: string): HullModel => readOffsetsCsv(readFileSync(new URL(`../../offsets-demo/${file}`, import.meta.url), 'utf8')).hull;
+const rho = 1.025;
+
+function codeOf(f: () => unknown): string {
+  try {
+    f();
+  } catch (e) {
+    if (isHalfbreadthError(e)) return `${e.issues[0]!.code} ${e.issues[0]!.message}`;
+    throw e;
+  }
+  return 'no error';
+}
+
+describe('a box barge with its centre of gravity off its centre of buoyancy', () => {
+  const L = 20;
+  const B = 6;
+  const T = 1.3;
+  const p = prepareHull(boxBarge(L, B, 4, 11, 5));
+  const displacement = rho * L * B * T;
+
+  test('trims by the trapezium: any trim that keeps the keel under water, without a KG', () => {
+    for (const lcg of [9.9, 9.5, 8.8, 11.2]) {
+      const fp = floatingPosition(p, { displacement, lcg }, rho);
+      const dF = (6 * T * lcg) / L - 2 * T;
+      const dA = 2 * T - dF;
+      expect(fp.draftAft, `LCG ${lcg}`).toBeRelClose(dA, 1e-8);
+      expect(fp.draftFwd, `LCG ${lcg}`).toBeRelClose(dF, 1e-8);
+      expect(fp.trim).toBeCloseTo(dA - dF, 8);
+      expect(fp.heel).toBe(0);
+    }
+  });
+
+  test('with a KG, a small trim is the trimming lever over GML', () => {
+    const kg = 2;
+    const lcg = 9.9; // 0.1 m forward... of LCB 10: a trim by the head
+    const fp = floatingPosition(p, { displacement, lcg, kg }, rho);
+    const upright = hydrostaticsAt(p, T);
+    const gml = upright.kml - kg;
+    // tan θ = (LCB - LCG) / GML; trim = L tan θ (by the stern positive).
+    const expected = (L * (upright.lcb - lcg)) / gml;
+    // The formula is the small-angle one: within 1 % at this trim of about 6 cm.
+    expect(fp.trim).toBeRelClose(expected, 0.01);
+  });
+});
+
+describe('on any hull the floating position balances', () => {
+  test.each([
+    ['the demo workboat', demo('workboat.csv'), { displacement: 40, lcg: 6.3, kg: 1.4 }],
+    ['the demo workboat, listed by a TCG', demo('workboat.csv'), { displacement: 45, lcg: 6.6, kg: 1.6, tcg: 0.15 }],
+    ['the demo survey launch', demo('survey-launch.csv'), { displacement: 4.5, lcg: 4.3, kg: 0.7 }],
+    ['the demo survey launch with no KG', demo('survey-launch.csv'), { displacement: 4.5, lcg: 4.0 }],
+  ] as const)('%s: B on the vertical through G to 1e-6 of the length, the volume to 1e-9', (_name, hull, load) => {
+    const p = prepareHull(hull);
+    const fp = floatingPosition(p, load, rho);
+    const w = waterplaneOf(p, fp.draft, fp.trim, fp.heel);
+    const v = inclinedHydrostatics(p, w);
+    expect(v.volume).toBeRelClose(load.displacement / rho, 1e-9);
+    // (B - G) parallel to the waterplane's normal n: its cross product with n vanishes.
+    const n = [Math.sin(w.trimAngle), -Math.sin(w.heel) * Math.cos(w.trimAngle), Math.cos(w.heel) * Math.cos(w.trimAngle)];
+    const g = [load.lcg, 'tcg' in load ? load.tcg : 0, 'kg' in load ? load.kg : v.zB];
+    const d = [v.xB - g[0]!, v.yB - g[1]!, v.zB - g[2]!];
+    const cross = [d[1]! * n[2]! - d[2]! * n[1]!, d[2]! * n[0]! - d[0]! * n[2]!, d[0]! * n[1]! - d[1]! * n[0]!];
+    for (const c of cross) expect(Math.abs(c)).toBeLessThan(1e-6 * p.perp.lbp);
+    if ('tcg' in load) expect(fp.heel).toBeGreaterThan(0.1); // listed to starboard
+    expect(Math.abs(fp.residuals.volume)).toBeLessThan(1e-9 * (load.displacement / rho));
+  });
+});
+
+describe('level drafts for displacements', () => {
+  test('the upright table at the drafts returned gives back the displacements to 1e-9', () => {
+    for (const [hull, list] of [
+      [demo('workboat.csv'), [12, 25, 40, 60]],
+      [demo('survey-launch.csv'), [1.5, 3, 4.5]],
+    ] as const) {
+      const p = prepareHull(hull);
+      const drafts = draftsForDisplacements(p, list, rho);
+      drafts.forEach((d, k) => expect(hydrostaticsAt(p, d, rho).displacement).toBeRelClose(list[k]!, 1e-9));
+    }
+  });
+
+  test('a displacement the hull cannot float is an error naming it and the limit', () => {
+    const p = prepareHull(demo('survey-launch.csv'));
+    const msg = codeOf(() => draftsForDisplacements(p, [3, 0, 500], rho));
+    expect(msg).toMatch(/^HYD_LOAD_OUT_OF_RANGE displacement 0 t/);
+    expect(codeOf(() => floatingPosition(p, { displacement: 500, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE displacement 500 t is more than the hull can float: wholly immersed to its deck it displaces [\d.]+ t/);
+    expect(codeOf(() => floatingPosition(p, { displacement: -1, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE/);
+    expect(codeOf(() => floatingPosition(p, { displacement: 3, lcg: 4, tcg: 0.1 }, rho))).toMatch(/HYD_BAD_ARGUMENT a TCG of 0.1 m heels the hull by an amount that depends on the height of G: give KG/);
+  });
+});
