@@ -8,3 +8,4 @@ export * from './levelDrafts.js';
 export * from './rightingLevers.js';
 export * from './solveVolume.js';
 export * from './stabilityInput.js';
+export * from './trimmedHydrostatics.js';

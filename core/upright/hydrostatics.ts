@@ -27,7 +27,7 @@ import { valuesBetween } from '../hull/betweenStations.js';
 import { emptyValues } from '../hull/section.js';
 import { isSpacingStep } from '../quadrature/lengthPanels.js';
 import { coefficient } from './coefficientNotes.js';
-import { forwardWettedGirth, isStationOrdinate, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
+import { forwardWettedGirth, isStationOrdinate, levelAt, ordinateValues, waterlinePlan, type WaterlinePlan } from './waterlinePlan.js';
 
 /** Check that a draft lies within the hull; the path names it in the request. */
 export function checkDraft(p: PreparedHull, draft: number, path: readonly (string | number)[] = ['draft']): void {
@@ -90,7 +90,7 @@ export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (stati
       }
       return sum;
     }
-    const between = valuesBetween(p.forward[i] ?? p.sections[i]!, p.sections[i + 1]!, (xm - x[i]!) / (x[i + 1]! - x[i]!), x[i + 1]! - x[i]!, plan.draft);
+    const between = valuesBetween(p.forward[i] ?? p.sections[i]!, p.sections[i + 1]!, (xm - x[i]!) / (x[i + 1]! - x[i]!), x[i + 1]! - x[i]!, levelAt(p, plan, xm));
     return between.area;
   }
   // Amidships in an end piece, or clear of the water.
@@ -100,7 +100,7 @@ export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (stati
     const b = plan.b[k]!;
     if (xm >= Math.min(x[a]!, x[b]!) && xm <= Math.max(x[a]!, x[b]!)) {
       const t = (xm - x[a]!) / (x[b]! - x[a]!);
-      return valuesBetween(p.sections[a]!, p.sections[b]!, t, x[b]! - x[a]!, plan.draft).area;
+      return valuesBetween(p.sections[a]!, p.sections[b]!, t, x[b]! - x[a]!, levelAt(p, plan, xm)).area;
     }
   }
   return 0;
@@ -109,7 +109,17 @@ export function midshipArea(p: PreparedHull, plan: WaterlinePlan, areaOf: (stati
 /** Hydrostatic particulars at one draft (m), density in t/m³. */
 export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WATER_DENSITY): HydrostaticRow {
   checkDraft(p, draft);
-  const plan = waterlinePlan(p, draft);
+  return rowOfPlan(p, waterlinePlan(p, draft), density);
+}
+
+/**
+ * The particulars of a level or trimmed waterline's plan (a trimmed waterline is level
+ * across, rising aft by plan.tanTrim; core/stability/trimmedHydrostatics.ts): every
+ * section cut level at the waterline's height at its own x, the plan's weights along the
+ * length. `draft` in the row is the height at amidships, and the coefficients take it.
+ */
+export function rowOfPlan(p: PreparedHull, plan: WaterlinePlan, density: number): HydrostaticRow {
+  const draft = plan.draft;
   const xm = p.perp.xm;
   const n = p.x.length;
   const v = emptyValues();
@@ -128,7 +138,7 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   for (let k = 0; k < plan.count; k++) {
     const station = isStationOrdinate(plan, k);
     // A station's own section directly: the common case, kept out of the general reader.
-    if (station) sections[at[k]!]!.evaluate(draft, v);
+    if (station) sections[at[k]!]!.evaluate(plan.tanTrim === 0 ? draft : levelAt(p, plan, plan.x[k]!), v);
     else ordinateValues(p, plan, k, v);
     const w = weight[k]!;
     const dx = plan.x[k]! - xm; // moments about amidships keep the sums well conditioned
@@ -165,7 +175,7 @@ export function hydrostaticsAt(p: PreparedHull, draft: number, density = SEA_WAT
   }
   const lwl = foremost - aftmost;
   const bwl = 2 * yMax;
-  const am = midshipArea(p, plan, (i) => (Number.isNaN(areas[i]!) ? p.sections[i]!.evaluate(draft).area : areas[i]!));
+  const am = midshipArea(p, plan, (i) => (Number.isNaN(areas[i]!) ? p.sections[i]!.evaluate(levelAt(p, plan, p.x[i]!)).area : areas[i]!));
   const ratio = coefficient;
   return {
     draft,

@@ -91,7 +91,13 @@ const BETWEEN = 2;
  * since a table builds one plan per draft; planOrdinates gives them as objects.
  */
 export interface WaterlinePlan {
+  /** The level waterline's height at amidships (NaN for an inclined waterplane's plan). */
   readonly draft: number;
+  /**
+   * How the level waterline rises aft: its height at x is draft + (xm - x) tanTrim
+   * (levelAt). 0 when level; trim by the stern over the LBP for a trimmed waterline.
+   */
+  readonly tanTrim: number;
   readonly count: number;
   /** Index into ORDINATE_KINDS. */
   readonly kind: readonly number[];
@@ -180,10 +186,16 @@ function immersedRuns(depth: ArrayLike<number>): [number, number][] {
  * The ordinates and weights at the level waterline `draft` (m), in x order. A draft below
  * every keel gives an empty plan.
  */
-export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptions = {}): WaterlinePlan {
+export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptions = {}, tanTrim = 0): WaterlinePlan {
   const depth = new Array<number>(p.x.length);
-  for (let i = 0; i < depth.length; i++) depth[i] = draft - p.keel[i]!;
-  return planOfDepths(p, depth, draft, options);
+  const xm = p.perp.xm;
+  for (let i = 0; i < depth.length; i++) depth[i] = draft + (xm - p.x[i]!) * tanTrim - p.keel[i]!;
+  return planOfDepths(p, depth, draft, options, tanTrim);
+}
+
+/** Height of the plan's waterline above the baseline at x (a level or trimmed waterline), m. */
+export function levelAt(p: PreparedHull, plan: WaterlinePlan, x: number): number {
+  return plan.tanTrim === 0 ? plan.draft : plan.draft + (p.perp.xm - x) * plan.tanTrim;
 }
 
 /**
@@ -194,7 +206,7 @@ export function waterlinePlan(p: PreparedHull, draft: number, options: PlanOptio
  * straight keel line crosses the waterline. `draft` is the level waterline's, kept in the
  * plan for its readers (NaN for an inclined one).
  */
-export function planOfDepths(p: PreparedHull, depth: ArrayLike<number>, draft: number, options: PlanOptions = {}): WaterlinePlan {
+export function planOfDepths(p: PreparedHull, depth: ArrayLike<number>, draft: number, options: PlanOptions = {}, tanTrim = 0): WaterlinePlan {
   const { x } = p;
   const n = x.length;
   const runs = immersedRuns(depth);
@@ -203,7 +215,7 @@ export function planOfDepths(p: PreparedHull, depth: ArrayLike<number>, draft: n
   const whole = runs.length === 1 && runs[0]![0] === 0 && runs[0]![1] === n - 1 && options.pieces !== true;
   if (whole) {
     const cached = p.panelCache.get('whole plan') as WaterlinePlan | undefined;
-    if (cached !== undefined) return planOf(draft, cached);
+    if (cached !== undefined) return planOf(draft, tanTrim, cached);
   }
   const weights: RunWeights[] = [];
   let count = 0;
@@ -307,15 +319,16 @@ export function planOfDepths(p: PreparedHull, depth: ArrayLike<number>, draft: n
       if (kFwdEnd >= 0) pieces.push({ from: x[b]!, to: ox[kFwdEnd]!, rule: SIMPSON_PIECE, ordinates: [at.get(b)!, kFwdEnd - 1, kFwdEnd] });
     }
   }
-  const plan = planOf(draft, { count, kind, x: ox, a: oa, b: ob, t: ot, weight, weightForward, pieces, ends, runs });
+  const plan = planOf(draft, tanTrim, { count, kind, x: ox, a: oa, b: ob, t: ot, weight, weightForward, pieces, ends, runs });
   if (whole) p.panelCache.set('whole plan', plan);
   return plan;
 }
 
 /** One object shape for every plan, so that the loops over plans stay monomorphic in V8. */
-function planOf(draft: number, q: Omit<WaterlinePlan, 'draft'>): WaterlinePlan {
+function planOf(draft: number, tanTrim: number, q: Omit<WaterlinePlan, 'draft' | 'tanTrim'>): WaterlinePlan {
   return {
     draft,
+    tanTrim,
     count: q.count,
     kind: q.kind,
     x: q.x,
@@ -347,13 +360,13 @@ export function planOrdinates(plan: WaterlinePlan): PlanOrdinate[] {
 export function ordinateValues(p: PreparedHull, plan: WaterlinePlan, k: number, out: SectionValues = emptyValues()): SectionValues {
   const a = plan.a[k]!;
   const kind = plan.kind[k]!;
-  if (kind === STATION) return p.sections[a]!.evaluate(plan.draft, out);
+  if (kind === STATION) return p.sections[a]!.evaluate(levelAt(p, plan, plan.x[k]!), out);
   const b = plan.b[k]!;
   const sa = sectionFacing(p, a, b);
   const sb = sectionFacing(p, b, a);
   const dx = p.x[b]! - p.x[a]!;
   if (kind === END) return keelLineEnd(sa, sb, plan.t[k]!, dx, out);
-  return valuesBetween(sa, sb, plan.t[k]!, dx, plan.draft, out);
+  return valuesBetween(sa, sb, plan.t[k]!, dx, levelAt(p, plan, plan.x[k]!), out);
 }
 
 /** Whether ordinate `k` is a station's own. */
@@ -364,7 +377,7 @@ export function isStationOrdinate(plan: WaterlinePlan, k: number): boolean {
 /** Wetted girth of station ordinate `k` with the slope factors of the panels forward of it, m. */
 export function forwardWettedGirth(p: PreparedHull, plan: WaterlinePlan, k: number, scratch: SectionValues): number {
   const fwd = p.forward[plan.a[k]!];
-  return fwd === undefined ? Number.NaN : fwd.evaluate(plan.draft, scratch).wettedGirth;
+  return fwd === undefined ? Number.NaN : fwd.evaluate(levelAt(p, plan, plan.x[k]!), scratch).wettedGirth;
 }
 
 /** Station i's section with the slope factors on the side facing station j. */
