@@ -22,6 +22,7 @@ import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { inclinedHydrostatics, waterplaneOf } from '../../core/stability/inclinedHydrostatics.js';
+import { draftsForDisplacements } from '../../core/stability/levelDrafts.js';
 import { trimmedHydrostaticsAt, trimmedHydrostaticTable } from '../../core/stability/trimmedHydrostatics.js';
 import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
 import { HYDROSTATIC_FIELDS } from '../../core/upright/hydrostaticFields.js';
@@ -163,6 +164,23 @@ describe('against the level table and the inclined waterplane', () => {
       expect(row.lcb).toBeCloseTo(ref.xB, 8);
       expect(row.vcb).toBeCloseTo(ref.zB, 8);
     }
+  });
+});
+
+describe('drafts for displacements at a held trim', () => {
+  const p = prepareHull(boxBarge(L, B, D, 11, 5));
+  const rho = 1.025;
+
+  test('a trimmed box: L B d with both ends in, B hA l / 2 with the forefoot out', () => {
+    // 40 m³ at 0.4 m by the stern: d = 40 / (L B) = 1 m. 21.125 m³ at 1.6 m by the stern:
+    // the wedge of hA = d + 0.8 over l = 10 hA / 1.6, so 4 hA² 10 / 3.2 = 21.125, hA = 1.3, d = 0.5.
+    expect(draftsForDisplacements(p, [40 * rho], rho, 0.4)[0]).toBeCloseTo(1, 11);
+    expect(draftsForDisplacements(p, [21.125 * rho], rho, 1.6)[0]).toBeCloseTo(0.5, 11);
+  });
+
+  test('more than the hull floats at that trim within its deck is refused, naming the limit', () => {
+    // At 1.2 m by the stern the transom's deck edge (2 m) is reached at 1.4 m amidships: L B 1.4 = 56 m³.
+    expect(() => draftsForDisplacements(p, [40, 60 * rho], rho, 1.2)).toThrow(/displacement 61.5 t is more than the hull floats at a trim of 1.2 m within its deck: 57.4 t .*draft 1.4 m amidships/);
   });
 });
 
