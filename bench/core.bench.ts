@@ -8,6 +8,9 @@
  *      and the two together
  *   c. the same at 201 x 81 and at 401 x 161, so that growth with size shows
  *   d. the command line end to end on the demo workboat (a child process each run)
+ *   e. stability on the 101 x 41 hull: the table at a trim, the floating position of a
+ *      load, cross curves (5 displacements x 19 heels, level and free to trim) and a GZ
+ *      curve read against the criteria
  *
  * The hulls of a to c are made here from a smooth formula (not a drawing): a plan
  * shape 1 - 0.8 xi^4 along the length times a section shape that rises from a quarter
@@ -18,7 +21,11 @@ import { existsSync, readFileSync } from 'node:fs';
 import { cpus, loadavg, platform, release } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { hydrostaticTable } from '../core/upright/hydrostatics.js';
+import { hydrostaticsAt, hydrostaticTable } from '../core/upright/hydrostatics.js';
+import { crossCurves } from '../core/stability/crossCurves.js';
+import { floatingPosition } from '../core/stability/floatingPosition.js';
+import { rightingLevers } from '../core/stability/rightingLevers.js';
+import { trimmedHydrostaticTable } from '../core/stability/trimmedHydrostatics.js';
 import { prepareHull } from '../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../core/offsets/readOffsets.js';
 
@@ -114,6 +121,33 @@ function coreLines(stations: number, waterlines: number, withTargets: boolean): 
   return out;
 }
 
+const RHO = 1.025;
+
+function stabilityLines(stations: number, waterlines: number): Line[] {
+  const size = `${stations} x ${waterlines}`;
+  const prepared = prepareHull(readOffsetsCsv(gridCsv(stations, waterlines)).hull);
+  const at = (d: number): number => hydrostaticsAt(prepared, d, RHO).displacement;
+  const displacements = [0.6, 0.9, 1.2, 1.5, 1.8].map(at);
+  const heels = Array.from({ length: 19 }, (_, k) => 5 * k);
+  const design = hydrostaticsAt(prepared, 1.5, RHO);
+  const trimmedDrafts = drafts(TABLE_DRAFTS).map((d) => 0.4 + 0.5 * d);
+  return [
+    { what: `e. table at 0.2 m trim, ${TABLE_DRAFTS} drafts`, size, t: measure(() => trimmedHydrostaticTable(prepared, trimmedDrafts, 0.2, RHO)) },
+    {
+      what: 'e. floating position, LCG 0.3 m aft of LCB',
+      size,
+      t: measure(() => floatingPosition(prepared, { displacement: design.displacement, lcg: design.lcb - 0.3 }, RHO)),
+    },
+    { what: 'e. cross curves 5 x 19, level trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'level'), 5, 400, 200) },
+    { what: 'e. cross curves 5 x 19, free trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'free'), 5, 400, 200) },
+    {
+      what: 'e. GZ curve and criteria, KG 2 m',
+      size,
+      t: measure(() => rightingLevers(prepared, { displacement: design.displacement, kg: 2 }, RHO)),
+    },
+  ];
+}
+
 function commandLine(root: string): Line {
   const bin = join(root, 'bin', 'halfbreadth.js');
   const args = [bin, 'hydrostatics', join(root, 'offsets-demo', 'workboat.csv'), '--drafts', '0.1:0.01:2.2', '--format', 'csv'];
@@ -159,6 +193,7 @@ function main(): void {
     ...coreLines(201, 81, false),
     ...coreLines(401, 161, false),
     commandLine(root),
+    ...stabilityLines(101, 41),
   ];
   console.log(report(lines));
 }
