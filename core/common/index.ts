@@ -9,4 +9,5 @@ export * from './errors.js';
 export * from './feetInches.js';
 export * from './hullName.js';
 export * from './limits.js';
+export * from './numberList.js';
 export * from './units.js';

@@ -20,6 +20,14 @@ export const LIMITS = {
   maxNameLength: 200,
   /** Most drafts in one hydrostatic table request. */
   maxDrafts: 2_000,
+  /** Most displacements in one list (cross curves, a table by displacement). */
+  maxDisplacements: 200,
+  /** Most heels in one list: every 5 degrees over a whole turn is 73. */
+  maxHeels: 73,
+  /** Most points of one set of cross curves, displacements x heels: each floats the hull once or more. */
+  maxCrossCurvePoints: 2_000,
+  /** Most openings (downflooding points) of one loading. */
+  maxOpenings: 50,
   /** Largest input read, bytes: an offsets file on the command line, a request body in the service (16 MiB). */
   maxInputBytes: 16 * 1024 * 1024,
 } as const;

@@ -1,6 +1,9 @@
 /**
- * The rules of the stability work's inputs, in one place: heels within a half turn either
- * way, and a deck edge given at every station for any heeled waterplane.
+ * The rules of the stability work's inputs, in one place for the core, the command line
+ * and the service: heels within a half turn either way, a deck edge given at every station
+ * for any heeled waterplane, the typed lists (displacements in t and heels in degrees as
+ * values and ranges from:step:to, core/common/numberList.ts; openings as `x,y,z` points
+ * separated by `;`) and the size of a set of cross curves.
  *
  * Heeled, a section's immersed part depends on where its deck edge is (deck immersion);
  * a grid table that stops at its top waterline without saying the deck edge is there
@@ -8,8 +11,12 @@
  * refused for such a table (HYD_DECK_NOT_GIVEN, naming the stations), and the deck_z and
  * deck_y columns of the grid form, or the points form, say where the deck edges are.
  */
+import { readDecimal } from '../common/decimal.js';
 import { fail } from '../common/errors.js';
+import { LIMITS } from '../common/limits.js';
+import { parseNumberList } from '../common/numberList.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
+import type { Opening } from './rightingLevers.js';
 
 /** Heels allowed, degrees: from a capsized hull one way to the other. */
 export const HEEL_RANGE = { min: -180, max: 180 } as const;
@@ -38,4 +45,35 @@ export function checkDeckEdges(p: PreparedHull, heels: readonly number[], deck: 
     ['offsets'],
     `heeled hydrostatics need every station's deck edge, and the table stops at its top waterline at x = ${xs.join(', ')} m${more} without saying the deck edge is there: give deck_z and deck_y (or the points form)`,
   );
+}
+
+/** Displacements, t: `5:2.5:15,16`. */
+export function parseDisplacements(text: string, path: readonly (string | number)[] = ['displacements']): number[] {
+  return parseNumberList(text, path, { noun: 'displacements', code: 'HYD_LOAD_OUT_OF_RANGE', max: LIMITS.maxDisplacements, example: '5:2.5:15,16' });
+}
+
+/** Heels, degrees: `0:10:90` or `-30:5:30`; each within HEEL_RANGE, checked where they are used. */
+export function parseHeels(text: string, path: readonly (string | number)[] = ['heels']): number[] {
+  return parseNumberList(text, path, { noun: 'heels', code: 'HYD_ANGLE_RANGE', max: LIMITS.maxHeels, example: '0:10:90' });
+}
+
+/** Openings (downflooding points) `x,y,z;x,y,z`, m in the hull's frame; where each lies is checked against the hull later. */
+export function parseOpenings(text: string, path: readonly (string | number)[] = ['openings']): Opening[] {
+  const parts = text.split(';').map((s) => s.trim()).filter((s) => s !== '');
+  if (parts.length > LIMITS.maxOpenings) fail('HYD_OPENING', path, `more than ${LIMITS.maxOpenings} openings`);
+  return parts.map((part, k) => {
+    const nums = part.split(',').map((s) => readDecimal(s.trim()));
+    if (nums.length !== 3 || nums.some((v) => !Number.isFinite(v))) {
+      fail('HYD_OPENING', [...path, k], `opening ${k + 1} "${part.slice(0, 40)}" is not a point x,y,z in metres (openings are separated by ;, e.g. 4.2,1.1,1.6;6,-0.9,1.8)`);
+    }
+    const [x, y, z] = nums as [number, number, number];
+    return { x, y, z };
+  });
+}
+
+/** A set of cross curves within LIMITS.maxCrossCurvePoints, else HYD_TOO_LARGE naming the product. */
+export function checkCrossCurveSize(displacements: number, heels: number, path: readonly (string | number)[] = ['heels']): void {
+  if (displacements * heels > LIMITS.maxCrossCurvePoints) {
+    fail('HYD_TOO_LARGE', path, `${displacements} displacements x ${heels} heels is ${displacements * heels} points of cross curves; at most ${LIMITS.maxCrossCurvePoints} in one request`);
+  }
 }
