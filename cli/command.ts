@@ -4,7 +4,7 @@
  * options a command declares, prints its help and maps what it returns or throws to an
  * exit code.
  */
-import type { CliIo } from './io.js';
+import type { CliIo, Format } from './io.js';
 
 export interface OptionSpec {
   readonly type: 'string' | 'boolean';
@@ -34,6 +34,13 @@ export interface Command {
   readonly options: Readonly<Record<string, OptionSpec>>;
   /** Names of the positional arguments, all required, in order, e.g. `<file|->`. */
   readonly positionals: readonly string[];
+  /**
+   * For a command that answers with a result of core/report/answerForm.ts: its forms and
+   * the form when stdout is piped. The shared options (`--format`, `--units`, `--fields`,
+   * `--digits`, `--plain-header`, `--input-units`; cli/answerOptions.ts) are then added to
+   * its options and help; the command reads them with answerOptions().
+   */
+  readonly answers?: { readonly formats: readonly Format[]; readonly piped: Format };
   /** Run with arguments already parsed and counted; resolves to the exit code. Throws HalfbreadthError for bad input. */
   run(args: CommandArgs, io: CliIo): Promise<number>;
 }

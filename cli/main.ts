@@ -6,7 +6,8 @@
  */
 import { parseArgs } from 'node:util';
 import { HalfbreadthError, issue, type Issue } from '../core/common/errors.js';
-import { EXIT, type Command, type CommandArgs } from './command.js';
+import { ANSWER_OPTIONS, answerOptionsHelp } from './answerOptions.js';
+import { EXIT, type Command, type CommandArgs, type OptionSpec } from './command.js';
 import { COMMANDS, findCommand } from './commands/index.js';
 import { processIo, STDIN_LABEL, type CliIo } from './io.js';
 import { printIssues } from './printIssues.js';
@@ -29,12 +30,16 @@ ${COMMANDS.map((c) => `  ${c.name.padEnd(w)}  ${c.summary}`).join('\n')}
 
 Input: an offsets CSV, grid form (x, then waterline heights) or points form
 (x, y, z and optionally knuckle), in m, mm, ft, in or ft-in-8 as its '# units:'
-line says; - reads standard input. Lengths typed on the command line (drafts)
-are metres.
+line or its x header cell (x (mm)) says, else as --input-units says, else m;
+cells split on commas, semicolons or tabs (a decimal comma is read where they
+are not commas); - reads standard input. Lengths typed on the command line
+(drafts) are metres, or feet with --units imperial.
 
 Output: --format table|csv|json chooses the form and always wins. Without it, a
 command writes a table when stdout is a terminal and CSV when it is piped or
-redirected, so '> table.csv' gives a file a spreadsheet opens.
+redirected, so '> table.csv' gives a file a spreadsheet opens. Every table
+command also takes --units si|imperial, --fields <list>, --digits <3..17> and
+--plain-header; numbers are written to 12 significant digits by default.
 
 Input is read up to 16 MiB. Numbers are plain decimals (1.25, 2e-1; no 0x).
 
@@ -51,15 +56,22 @@ flag or local authority's regulations and a qualified naval architect.
 }
 
 export function commandHelp(c: Command): string {
-  return `Usage: ${PROGRAM} ${c.synopsis}\n\n${c.help}\n`;
+  const shared = c.answers === undefined ? '' : `\n\n${answerOptionsHelp(c.answers.formats)}`;
+  return `Usage: ${PROGRAM} ${c.synopsis}\n\n${c.help}${shared}\n`;
+}
+
+/** A command's options: its own, and the shared ones of a command that answers with a table. */
+export function optionsOf(c: Command): Readonly<Record<string, OptionSpec>> {
+  return c.answers === undefined ? c.options : { ...ANSWER_OPTIONS, ...c.options };
 }
 
 const bad = (path: string, message: string): Issue => issue('HYD_BAD_ARGUMENT', [path], message);
 
 /** The arguments after the command word, checked against the command's options: all problems at once. */
 export function parseCommandArgs(c: Command, args: readonly string[]): CommandArgs & { help: boolean } {
+  const specs = optionsOf(c);
   const options = Object.fromEntries(
-    Object.entries(c.options).map(([name, o]) => [name, o.short === undefined ? { type: o.type } : { type: o.type, short: o.short }]),
+    Object.entries(specs).map(([name, o]) => [name, o.short === undefined ? { type: o.type } : { type: o.type, short: o.short }]),
   );
   // Not strict: the tokens are checked here, so that every problem is reported in our words.
   const { tokens } = parseArgs({
@@ -82,7 +94,7 @@ export function parseCommandArgs(c: Command, args: readonly string[]): CommandAr
       help = true;
       continue;
     }
-    const spec = c.options[t.name];
+    const spec = specs[t.name];
     if (spec === undefined) {
       issues.push(bad(t.rawName, `unknown option ${t.rawName}; ${see}`));
     } else if (values[t.name] !== undefined) {
@@ -99,7 +111,7 @@ export function parseCommandArgs(c: Command, args: readonly string[]): CommandAr
     }
   }
   if (!help) {
-    for (const [name, spec] of Object.entries(c.options)) {
+    for (const [name, spec] of Object.entries(specs)) {
       if (spec.required === true && values[name] === undefined && !issues.some((i) => i.path[0] === `--${name}`)) {
         const eg = spec.example === undefined ? '' : ` (e.g. ${spec.example})`;
         issues.push(bad(`--${name}`, `--${name} is required${eg}`));

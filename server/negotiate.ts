@@ -73,3 +73,4 @@ export function chooseFormat(req: FastifyRequest, format: Format | undefined, of
 
 export const CSV_MEDIA_TYPE = 'text/csv; charset=utf-8; header=present';
 export const JSON_MEDIA_TYPE = 'application/json; charset=utf-8';
+export const TEXT_MEDIA_TYPE = 'text/plain; charset=utf-8';

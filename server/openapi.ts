@@ -114,7 +114,11 @@ function operation(spec: RouteSpec, requestNames: readonly [string, z.ZodType][]
     if (r.csv !== undefined) content['text/csv'] = { schema: { type: 'string', description: r.csv } };
     if (r.other !== undefined) content[r.other.mediaType] = { schema: { type: 'string', description: r.other.description } };
     if (Object.keys(content).length > 0) res.content = content;
-    if (r.headers !== undefined) res.headers = Object.fromEntries(r.headers.map((h) => [h, { schema: { type: 'string' } }]));
+    if (r.headers !== undefined) {
+      res.headers = Object.fromEntries(
+        r.headers.map((h) => (typeof h === 'string' ? [h, { schema: { type: 'string' } }] : [h.name, { description: h.description, schema: { type: 'string' } }])),
+      );
+    }
     responses[status] = res;
   }
   for (const status of spec.problems) {
@@ -144,7 +148,8 @@ export function buildOpenapi(routes: readonly RouteSpec[]): Json {
       description:
         'Turns a table of offsets (grid or points form) into upright hydrostatic particulars by Simpson\'s rules, ' +
         'with the calculation sheet, Bonjean data and the sectional-area curve behind them, ' +
-        'and keeps hulls in a store. Lengths in m, densities in t/m3. Failures are RFC 9457 problem documents whose ' +
+        'and keeps hulls in a store. Lengths in m (or feet with units=imperial), densities in t/m3; every x from the offsets\' origin. ' +
+        'Every computation also takes units=, fields=, digits= and header=plain. Failures are RFC 9457 problem documents whose ' +
         `type is /problems/<slug>.\n\n${CAUTION}`,
     },
     tags: [

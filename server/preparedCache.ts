@@ -4,7 +4,7 @@
  * the name, which together fix the model: a replaced hull misses and is prepared anew.
  */
 import { Lru } from './lru.js';
-import { loadHull, notesOfSource, type LoadedHull } from './hullInput.js';
+import { loadHull, sourceReading, type LoadedHull } from './hullInput.js';
 import type { HullMeta, HullStore } from './store/hullStore.js';
 
 export class PreparedCache {
@@ -24,8 +24,8 @@ export class PreparedCache {
     if (hit === undefined) {
       const stored = this.store.get(meta.id);
       if (stored === undefined) throw new Error(`hull ${meta.id} vanished between two reads of one request`);
-      const notes = notesOfSource(stored.mediaType, () => this.store.source(meta.id)?.bytes);
-      hit = loadHull({ hull: stored.model, form: stored.form, units: stored.units, notes });
+      const source = sourceReading(stored.mediaType, () => this.store.source(meta.id)?.bytes, stored.units);
+      hit = loadHull({ hull: stored.model, form: stored.form, units: stored.units, ...source });
       this.lru.set(key, hit);
     }
     return hit;

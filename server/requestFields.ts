@@ -10,6 +10,8 @@ import { readDecimal } from '../core/common/decimal.js';
 import { checkDensity } from '../core/common/density.js';
 import { NAME_PATTERN } from '../core/common/hullName.js';
 import { parseDraftList } from '../core/common/draftList.js';
+import { readTypedLength, TYPED_LENGTH_HINT, typedLengthFactor } from '../core/common/typedLength.js';
+import type { UnitSystem } from '../core/common/units.js';
 import { LIMITS } from '../core/common/limits.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
 import { addCoreIssues, type FieldCodes } from './validate.js';
@@ -22,76 +24,134 @@ export const FIELD_CODES: FieldCodes = {
   offsets: 'HYD_MODEL_INVALID',
 };
 
-const DRAFTS_HINT = 'give drafts in m as values and ranges from:step:to, e.g. 0.2:0.1:1.2,1.25';
+const DRAFTS_HINT: Readonly<Record<UnitSystem, string>> = {
+  si: 'give drafts in m as values and ranges from:step:to, e.g. 0.2:0.1:1.2,1.25',
+  imperial: 'give drafts in ft (units=imperial) as values and ranges from:step:to, decimal or feet-inches-eighths, e.g. 2-0-0:0-3-0:4-0-0',
+};
+const LENGTH_WORD: Readonly<Record<UnitSystem, string>> = { si: 'metres', imperial: 'feet (units=imperial)' };
+const UNIT_WORD: Readonly<Record<UnitSystem, string>> = { si: 'm', imperial: 'ft (units=imperial)' };
 
-/** `drafts=0.2:0.1:1.2,1.25` in a query. */
-export const DraftsQuery = z
-  .string({ error: (iss) => (iss.input === undefined ? `drafts is required; ${DRAFTS_HINT}` : `drafts must be given once; ${DRAFTS_HINT}`) })
-  .max(SERVICE_LIMITS.maxDraftsText, { error: `the drafts text is longer than ${SERVICE_LIMITS.maxDraftsText} characters; use ranges from:step:to` })
-  .transform((text, ctx) => {
-    try {
-      return parseDraftList(text, ['drafts']);
-    } catch (e) {
-      addCoreIssues(e, ctx, text);
-      return z.NEVER;
-    }
-  })
-  .describe(`drafts, m: comma-separated values and inclusive ranges from:step:to, at most ${LIMITS.maxDrafts} in all`)
-  .meta({ examples: ['0.2:0.1:1.2,1.25'] });
+/** `drafts=0.2:0.1:1.2,1.25` in a query: metres, or feet with units=imperial; given in metres. */
+export function draftsQuery(system: UnitSystem) {
+  const hint = DRAFTS_HINT[system];
+  return z
+    .string({ error: (iss) => (iss.input === undefined ? `drafts is required; ${hint}` : `drafts must be given once; ${hint}`) })
+    .max(SERVICE_LIMITS.maxDraftsText, { error: `the drafts text is longer than ${SERVICE_LIMITS.maxDraftsText} characters; use ranges from:step:to` })
+    .transform((text, ctx) => {
+      try {
+        return parseDraftList(text, ['drafts'], system);
+      } catch (e) {
+        addCoreIssues(e, ctx, text);
+        return z.NEVER;
+      }
+    })
+    .describe(`drafts, ${UNIT_WORD[system]}: comma-separated values and inclusive ranges from:step:to, at most ${LIMITS.maxDrafts} in all${system === 'si' ? '; with units=imperial in feet, decimal or feet-inches-eighths (2-6-0, 3-4-5+, 3-4-5-)' : ''}`)
+    .meta({ examples: ['0.2:0.1:1.2,1.25'] });
+}
 
-/** `drafts: [0.5, 0.6]` in a JSON body. */
-export const DraftsBody = z
-  .array(z.number({ error: (iss) => `a draft must be a number of metres, not ${JSON.stringify(iss.input) ?? 'nothing'}` }), {
-    error: (iss) => (iss.input === undefined ? `drafts is required; give an array of drafts in m` : 'drafts must be an array of numbers, m'),
-  })
-  .min(1, { error: 'drafts is empty; give at least one draft, m' })
-  .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} drafts` })
-  .describe(`drafts, m, at most ${LIMITS.maxDrafts}`);
+/** `drafts: [0.5, 0.6]` in a JSON body: metres, or feet with units=imperial; given in metres. */
+export function draftsBody(system: UnitSystem) {
+  const f = typedLengthFactor(system);
+  return z
+    .array(z.number({ error: (iss) => `a draft must be a number of ${LENGTH_WORD[system]}, not ${JSON.stringify(iss.input) ?? 'nothing'}` }), {
+      error: (iss) => (iss.input === undefined ? `drafts is required; give an array of drafts in ${UNIT_WORD[system]}` : `drafts must be an array of numbers, ${UNIT_WORD[system]}`),
+    })
+    .min(1, { error: `drafts is empty; give at least one draft, ${UNIT_WORD[system]}` })
+    .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} drafts` })
+    .transform((v) => (f === 1 ? v : v.map((d) => d * f)))
+    .describe(`drafts, m (ft with units=imperial), at most ${LIMITS.maxDrafts}`);
+}
 
 /** Extra Bonjean heights: the drafts list of a query, optional (none asked for: the tabulated heights only). */
-export const HeightsQuery = DraftsQuery.optional().describe(
-  `extra heights, m, at which every station's area is also given: values and ranges from:step:to, at most ${LIMITS.maxDrafts} in all; each must meet some station`,
-);
+export function heightsQuery(system: UnitSystem) {
+  return draftsQuery(system)
+    .optional()
+    .describe(`extra heights, ${UNIT_WORD[system]}, at which every station's area is also given: values and ranges from:step:to, at most ${LIMITS.maxDrafts} in all; each must meet some station`);
+}
 
 /** Extra Bonjean heights in a JSON body; may be left out or empty. */
-export const HeightsBody = z
-  .array(z.number({ error: (iss) => `a height must be a number of metres, not ${JSON.stringify(iss.input) ?? 'nothing'}` }), {
-    error: 'drafts must be an array of heights, m',
-  })
-  .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} heights` })
-  .optional()
-  .describe(`extra heights, m, at most ${LIMITS.maxDrafts}; each must meet some station`);
+export function heightsBody(system: UnitSystem) {
+  const f = typedLengthFactor(system);
+  return z
+    .array(z.number({ error: (iss) => `a height must be a number of ${LENGTH_WORD[system]}, not ${JSON.stringify(iss.input) ?? 'nothing'}` }), {
+      error: `drafts must be an array of heights, ${UNIT_WORD[system]}`,
+    })
+    .max(LIMITS.maxDrafts, { error: `more than ${LIMITS.maxDrafts} heights` })
+    .transform((v) => (f === 1 ? v : v.map((d) => d * f)))
+    .optional()
+    .describe(`extra heights, m (ft with units=imperial), at most ${LIMITS.maxDrafts}; each must meet some station`);
+}
 
 /** A plain decimal number as typed (`1.3`, `.5`, `2e-1`), else NaN: the one number syntax of core/common/decimal.ts. */
 export const decimalNumber = readDecimal;
 
-const DRAFT_HINT = 'give one draft in m above the baseline, e.g. 1.3';
+const DRAFT_HINT: Readonly<Record<UnitSystem, string>> = {
+  si: 'give one draft in m above the baseline, e.g. 1.3',
+  imperial: 'give one draft in ft above the baseline, decimal or feet-inches-eighths, e.g. 4.25 or 4-3-0',
+};
 
-/** `draft=1.3` in a query: one plain number of metres; whether it lies within the hull is core's check (checkDraft). */
-export const DraftQuery = z
-  .string({ error: (iss) => (iss.input === undefined ? `draft is required; ${DRAFT_HINT}` : `draft must be given once; ${DRAFT_HINT}`) })
-  .transform((text, ctx) => {
-    const value = decimalNumber(text);
-    if (!Number.isFinite(value)) {
-      ctx.addIssue({ code: 'custom', message: `draft '${text.slice(0, 40)}' is not one number of metres; ${DRAFT_HINT}`, input: text, params: { code: 'HYD_DRAFT_LIST' } });
-      return z.NEVER;
-    }
-    return value;
-  })
-  .describe('draft, m: the height of the waterline above the baseline, above the lowest keel and at or below the lowest deck edge')
-  .meta({ examples: ['1.3'] });
+/** `draft=1.3` in a query: one length, metres or (units=imperial) feet; whether it lies within the hull is core's check (checkDraft). */
+export function draftQuery(system: UnitSystem) {
+  const hint = DRAFT_HINT[system];
+  return z
+    .string({ error: (iss) => (iss.input === undefined ? `draft is required; ${hint}` : `draft must be given once; ${hint}`) })
+    .transform((text, ctx) => {
+      const value = readTypedLength(text, system);
+      if (!Number.isFinite(value)) {
+        ctx.addIssue({ code: 'custom', message: `draft '${text.slice(0, 40)}' is not ${TYPED_LENGTH_HINT[system]}; ${hint}`, input: text, params: { code: 'HYD_DRAFT_LIST' } });
+        return z.NEVER;
+      }
+      return value;
+    })
+    .describe(`draft, ${UNIT_WORD[system]}: the height of the waterline above the baseline, above the lowest keel and at or below the lowest deck edge${system === 'si' ? '; with units=imperial in feet, decimal or feet-inches-eighths' : ''}`)
+    .meta({ examples: ['1.3'] });
+}
 
-/** `draft: 1.3` in a JSON body. */
-export const DraftBody = z
-  .number({
-    error: (iss) =>
-      iss.input === undefined
-        ? `draft is required; ${DRAFT_HINT}`
-        : typeof iss.input === 'number'
-          ? `draft ${iss.input} is not a finite number of metres; ${DRAFT_HINT}`
-          : `draft must be a number of metres, not ${JSON.stringify(iss.input)?.slice(0, 40) ?? 'nothing'}`,
-  })
-  .describe('draft, m: the height of the waterline above the baseline');
+/** `draft: 1.3` in a JSON body: metres, or feet with units=imperial; given in metres. */
+export function draftBody(system: UnitSystem) {
+  const hint = DRAFT_HINT[system];
+  const f = typedLengthFactor(system);
+  return z
+    .number({
+      error: (iss) =>
+        iss.input === undefined
+          ? `draft is required; ${hint}`
+          : typeof iss.input === 'number'
+            ? `draft ${iss.input} is not a finite number of ${LENGTH_WORD[system]}; ${hint}`
+            : `draft must be a number of ${LENGTH_WORD[system]}, not ${JSON.stringify(iss.input)?.slice(0, 40) ?? 'nothing'}`,
+    })
+    .transform((v) => v * f)
+    .describe(`draft, m (ft with units=imperial): the height of the waterline above the baseline`);
+}
+
+/** The SI forms, which the computations declare; their imperial forms replace them when a request asks for imperial units. */
+export const DraftsQuery = draftsQuery('si');
+export const DraftsBody = draftsBody('si');
+export const HeightsQuery = heightsQuery('si');
+export const HeightsBody = heightsBody('si');
+export const DraftQuery = draftQuery('si');
+export const DraftBody = draftBody('si');
+
+/** Each length field of a request (as a computation declares it) and its form for lengths typed in feet. */
+export const IMPERIAL_FORMS: ReadonlyMap<z.ZodType, z.ZodType> = new Map<z.ZodType, z.ZodType>([
+  [DraftsQuery, draftsQuery('imperial')],
+  [DraftsBody, draftsBody('imperial')],
+  [HeightsQuery, heightsQuery('imperial')],
+  [HeightsBody, heightsBody('imperial')],
+  [DraftQuery, draftQuery('imperial')],
+  [DraftBody, draftBody('imperial')],
+]);
+
+/** A request schema with its length fields read in the unit system (feet for imperial). */
+export function inUnitSystem(schema: z.ZodObject, system: UnitSystem): z.ZodObject {
+  if (system === 'si') return schema;
+  const swaps: Record<string, z.ZodType> = {};
+  for (const [k, v] of Object.entries(schema.shape)) {
+    const imperial = IMPERIAL_FORMS.get(v as z.ZodType);
+    if (imperial !== undefined) swaps[k] = imperial;
+  }
+  return Object.keys(swaps).length === 0 ? schema : schema.extend(swaps);
+}
 
 const DENSITY_TEXT = `water density, t/m3, ${DENSITY_RANGE.min} to ${DENSITY_RANGE.max} (default ${SEA_WATER_DENSITY}, sea water)`;
 

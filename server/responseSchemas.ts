@@ -59,6 +59,7 @@ export const HullRecordSchema = HullListItemSchema.extend({
     self: z.string(),
     source: z.string().describe('the upload, byte for byte'),
     hydrostatics: z.string().describe('template: add drafts=...'),
+    value: z.string().describe('template of one figure as text/plain: put a field of the table for {field}, and add a draft'),
     sheet: z.string().describe('template: add draft=...'),
     bonjean: z.string().describe('add drafts=... for extra heights'),
     areas: z.string().describe('template: add draft=...'),

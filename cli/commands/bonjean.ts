@@ -6,23 +6,22 @@
 import type { Issue } from '../../core/common/errors.js';
 import { bonjean as bonjeanData } from '../../core/upright/bonjean.js';
 import { parseDraftList } from '../../core/common/draftList.js';
-import { bonjeanCsv, bonjeanResult, bonjeanText } from '../../core/report/formatBonjean.js';
-import { toJson } from '../../core/report/formatHydrostatics.js';
+import { BONJEAN_FORM, bonjeanResult } from '../../core/report/formatBonjean.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
-import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { answerOptions, converterOf, readOffsetsOf, writeResult } from '../answerOptions.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo, str } from '../io.js';
+import { readInput, type CliIo, str } from '../io.js';
 
 export const bonjean: Command = {
   name: 'bonjean',
   summary: 'Bonjean data: the immersed area of every station against height',
-  synopsis: 'bonjean <file|-> [--drafts <list>] [--format <form>]',
+  synopsis: 'bonjean <file|-> [--drafts <list>] [options]',
   positionals: ['<file|->'],
+  answers: { formats: ['table', 'csv', 'json'], piped: 'csv' },
   options: {
     drafts: { type: 'string', example: '--drafts 1.3,1.45' },
-    format: { type: 'string', example: '--format csv' },
   },
   help: `The Bonjean data of the hull: for every station, the immersed area of its
 section (both sides) and the moment of that area about the baseline, from the
@@ -34,14 +33,13 @@ Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input
 
 Options:
-  --drafts <list>     extra heights in metres, values and ranges from:step:to,
-                      e.g. 1.3,1.45 or 0.1:0.1:2; each must meet some station
-  --format <form>     table, csv or json (default: table on a terminal, csv when
-                      piped or redirected)
+  --drafts <list>     extra heights in metres (feet with --units imperial),
+                      values and ranges from:step:to, e.g. 1.3,1.45 or
+                      0.1:0.1:2; each must meet some station
   -h, --help          this help
 
 Forms:
-  table   areas in m2, stations down and heights across
+  table   areas, stations down and heights across
   csv     x_m, z_m, area_m2, momentZ_m3: one row per station and height
   json    { "hull", "caution", "stations": [ { "x", "keel", "deck",
           "points": [ { "z", "area", "momentZ" } ] } ] }
@@ -53,15 +51,15 @@ Example:
   async run(args: CommandArgs, io: CliIo): Promise<number> {
     const issues: Issue[] = [];
     const { values } = args;
-    const format = attempt(() => chooseFormat(str(values['format']), ['table', 'csv', 'json'], 'csv', io.stdout), issues);
+    const choice = attempt(() => answerOptions(args, ['table', 'csv', 'json'], 'csv', io), issues);
     const text = str(values['drafts']);
-    const extra = text === undefined ? [] : attempt(() => parseDraftList(text), issues);
+    const extra = text === undefined ? [] : attempt(() => parseDraftList(text, ['drafts'], choice?.output.units ?? 'si'), issues);
     const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
-    const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
+    const read = input === undefined ? undefined : attempt(() => readOffsetsOf(input, choice), issues);
     throwIfAny(issues);
     const { hull } = read!;
-    const result = bonjeanResult(hull, bonjeanData(prepareHull(hull), extra!));
-    io.stdout.write(format === 'json' ? toJson(result) + '\n' : format === 'csv' ? bonjeanCsv(result) : terminalSafe(bonjeanText(result)));
+    const conv = await converterOf(choice!);
+    writeResult(io, BONJEAN_FORM, bonjeanResult(hull, bonjeanData(prepareHull(hull), extra!)), choice!, conv);
     return EXIT.ok;
   },
 };

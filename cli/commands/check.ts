@@ -5,15 +5,15 @@
  */
 import { CAUTION } from '../../core/common/caution.js';
 import { HalfbreadthError, type Issue } from '../../core/common/errors.js';
-import { fairnessWarnings } from '../../core/fairness/fairness.js';
+import { fairnessWarningsIn } from '../../core/fairness/fairnessInFile.js';
 import { checkWarnings, proportionWarnings } from '../../core/offsets/readingWarnings.js';
-import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
-import { readOffsetsCsv, type ReadResult } from '../../core/offsets/readOffsets.js';
-import { toJson } from '../../core/report/formatHydrostatics.js';
+import type { ReadResult } from '../../core/offsets/readOffsets.js';
+import type { AnswerForm, FormContext } from '../../core/report/answerForm.js';
+import { answerOptions, converterOf, readOffsetsOf, writeResult } from '../answerOptions.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
-import { chooseFormat, readInput, terminalSafe, type CliIo } from '../io.js';
+import { readInput, terminalSafe, type CliIo } from '../io.js';
 import { issueLines } from '../printIssues.js';
 
 /** A remark on a sound hull that a person should look at, such as an offset that is not fair. */
@@ -32,7 +32,7 @@ export interface Warning {
 export const WARNING_CHECKS: readonly ((read: ReadResult) => readonly Warning[])[] = [
   (read) => checkWarnings(read.notes),
   (read) => proportionWarnings(read.hull, read.units),
-  (read) => fairnessWarnings(read.hull),
+  (read) => fairnessWarningsIn(read.hull, read),
 ];
 
 /** What `check` reports of a sound file. Lengths in metres, whatever the file's units. */
@@ -85,10 +85,10 @@ export interface CheckReport {
   caution: string;
 }
 
-const m = (v: number): string => `${v.toFixed(3)} m`;
-
-/** The particulars as aligned lines for the terminal. */
-export function particularsText(label: string, p: Particulars): string {
+/** The particulars as aligned lines for the terminal, lengths in the answer's unit. */
+export function particularsText(label: string, p: Particulars, ctx: Pick<FormContext, 'n' | 'u'>): string {
+  const u = ctx.u('m');
+  const m = (v: number): string => `${Number.isFinite(v) ? v.toFixed(3) : '-'} ${u}`;
   const rows: [string, string][] = [
     ['name', p.name],
     ['form', p.form === 'grid' ? 'grid (table of offsets)' : 'points (sections as point lists)'],
@@ -105,15 +105,36 @@ export function particularsText(label: string, p: Particulars): string {
     ['drafts', `above ${m(p.drafts.above)}, up to ${m(p.drafts.atMost)}`],
   ];
   const w = Math.max(...rows.map(([k]) => k.length));
-  return [`${label}: reads without error (lengths in metres)`, ...rows.map(([k, v]) => `  ${k.padEnd(w)}  ${v}`), '', CAUTION].join('\n') + '\n';
+  return [
+    `${label}: reads without error (lengths in ${u === 'm' ? 'metres' : 'feet'}; x from the offsets' origin)`,
+    ...rows.map(([k, v]) => `  ${k.padEnd(w)}  ${v}`),
+    '',
+    CAUTION,
+  ].join('\n') + '\n';
+}
+
+/** The check's answer: findings, not a table (no columns, no CSV); its lengths convert with the units. */
+function checkForm(label: string): AnswerForm<CheckReport> {
+  const pair = { lowest: 'm', highest: 'm' };
+  return {
+    units: {
+      particulars: { ap: 'm', fp: 'm', lbp: 'm', amidships: 'm', keel: pair, deckEdge: pair, drafts: { above: 'm', atMost: 'm' } },
+      warnings: [{ x: 'm', z: 'm', value: 'm', suggested: 'm' }],
+    },
+    columns: [],
+    jsonOnly: true,
+    lines: () => [],
+    text: (r, ctx) => (r.particulars === null ? '' : particularsText(label, r.particulars, ctx)),
+  };
 }
 
 export const check: Command = {
   name: 'check',
   summary: 'validate an offsets file: particulars, errors, unfair offsets',
-  synopsis: 'check <file|-> [--format table|json]',
+  synopsis: 'check <file|-> [options]',
   positionals: ['<file|->'],
-  options: { format: { type: 'string', example: '--format json' } },
+  answers: { formats: ['table', 'json'], piped: 'table' },
+  options: {},
   help: `Reads an offsets file and reports either what it holds (name, form,
 units, stations, waterlines, points, ap, fp, LBP, amidships, keel and deck-edge
 heights, and the drafts a hydrostatic table of it may use) or every error
@@ -121,12 +142,13 @@ found, each with its line and column. It also warns of offsets that are not
 fair (a bump or hollow in a waterline or a section, with a fair value), of a
 keel taken at a tabulated waterline where a keel_z column would place it,
 and of proportions that suggest the wrong unit (no vessel is over 400 m).
+Errors and warnings name the line and column and give values in the file's
+own units; the particulars are in metres, or feet with --units imperial.
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input
 
 Options:
-  --format <form>     table or json (default table)
   -h, --help          this help
 
 Forms:
@@ -135,19 +157,18 @@ Forms:
           "caution": "..." } on stdout; each error is { code, path, message };
           each warning { code, path, message }, and for an offset that is
           not fair along its waterline or section also x, z, value and a
-          fair value from its neighbours; errors and warnings also go to
-          stderr
+          fair value from its neighbours (in metres, or feet) and its line
+          and column; errors and warnings also go to stderr
 
 Exit status: 0 when the file reads without error, 2 when it has errors.`,
   async run(args: CommandArgs, io: CliIo): Promise<number> {
-    const requested = args.values['format'];
-    const format = chooseFormat(typeof requested === 'string' ? requested : undefined, ['table', 'json'], 'table', io.stdout);
+    const choice = answerOptions(args, ['table', 'json'], 'table', io);
     const input = await readInput(args.positionals[0]!, io);
     const program = 'halfbreadth check';
     let read: ReadResult | undefined;
     let errors: readonly Issue[] = [];
     try {
-      read = readOffsetsCsv(input.text);
+      read = readOffsetsOf(input, choice);
     } catch (e) {
       if (!(e instanceof HalfbreadthError)) throw e;
       errors = e.issues;
@@ -156,12 +177,9 @@ Exit status: 0 when the file reads without error, 2 when it has errors.`,
     const found = read === undefined ? null : particulars(read);
     if (errors.length > 0) io.stderr.write(issueLines(errors, input.label, program).join('\n') + '\n');
     if (warnings.length > 0) io.stderr.write(warnings.map((w) => terminalSafe(`${input.label}: warning: ${w.message}`)).join('\n') + '\n');
-    if (format === 'json') {
-      const report: CheckReport = { errors, warnings, particulars: found, caution: CAUTION };
-      io.stdout.write(toJson(report) + '\n');
-    } else if (found !== null) {
-      io.stdout.write(terminalSafe(particularsText(input.label, found)));
-    }
+    const conv = await converterOf(choice);
+    const report: CheckReport = { errors, warnings, particulars: found, caution: CAUTION };
+    writeResult(io, checkForm(input.label), report, choice, conv);
     return errors.length > 0 ? EXIT.badInput : EXIT.ok;
   },
 };

@@ -52,3 +52,21 @@ export function readDecimal(text: string): number {
   const t = text.trim();
   return isDecimal(t) ? Number(t) : Number.NaN;
 }
+
+/**
+ * A number written with a decimal comma, as a spreadsheet in a locale with a decimal
+ * comma writes it (`0,25`, `-1,5e-3`), given as the same text with a point; any other
+ * text is given back as it is. The one exception to the plain-decimal rule, and only for
+ * an offsets file whose cells are not split on commas (a semicolon or tab delimiter), so
+ * that a comma can be nothing but the decimal mark there. A point and a comma together
+ * (`1.000,5`, a thousands separator) or two commas are not rewritten, and so stay errors.
+ *
+ * @example decimalCommaAsPoint('0,25') // '0.25'
+ * @example decimalCommaAsPoint('1.000,5') // '1.000,5'
+ */
+export function decimalCommaAsPoint(t: string): string {
+  const at = t.indexOf(',');
+  if (at < 0 || t.indexOf(',', at + 1) >= 0 || t.indexOf('.') >= 0) return t;
+  const s = `${t.slice(0, at)}.${t.slice(at + 1)}`;
+  return isDecimal(s) ? s : t;
+}

@@ -29,6 +29,7 @@ export const ERROR_CODES = {
   HYD_KNUCKLE_VALUE: 'A knuckle cell holds something other than 0 or 1.',
   HYD_METADATA_UNKNOWN: 'A metadata key is not one the offsets files know.',
   HYD_METADATA_VALUE: 'A metadata value is malformed (unknown units, non-numeric ap or fp).',
+  HYD_UNITS_CONFLICT: 'The unit of an offsets file is given twice and the two disagree (the units line, the x header cell, the input-units option).',
   HYD_METADATA_PLACE: 'A metadata line lies after the header row, where it would not be read.',
   HYD_PERPENDICULARS: 'The perpendiculars are not in order (fp must lie forward of ap).',
   HYD_TOO_LARGE: 'The input is larger than the documented limits.',

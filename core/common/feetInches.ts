@@ -1,8 +1,9 @@
 /**
- * Feet-inches-eighths, the notation of lofting tables: `3-4-5` is 3 ft 4 5/8 in, and a
- * trailing `+` adds a sixteenth (`3-4-5+` is 3 ft 4 11/16 in). A leading minus marks a
- * length aft of the origin or below it (`-3-4-5`); plain `0` is zero. Inches run 0 to
- * 11 and eighths 0 to 7. (Common practice of the lofting floor, no source.)
+ * Feet-inches-eighths, the notation of lofting tables: `3-4-5` is 3 ft 4 5/8 in, a
+ * trailing `+` adds a sixteenth (`3-4-5+` is 3 ft 4 11/16 in) and a trailing `-` takes
+ * one away (`3-4-5-` is 3 ft 4 9/16 in, the loftsman's "minus a sixteenth"). A leading
+ * minus marks a length aft of the origin or below it (`-3-4-5`); plain `0` is zero.
+ * Inches run 0 to 11 and eighths 0 to 7. (Common practice of the lofting floor, no source.)
  *
  * Values are in feet: multiply by lengthFactor('ft-in-8') (0.3048) for metres.
  */
@@ -20,7 +21,7 @@ const SIXTEENTHS_PER_FOOT = 12 * 16;
 export const FEET_TOO_LARGE = 'has too many feet to be a finite number';
 
 const shape = (t: string): string =>
-  `'${t}' is not feet-inches-eighths: write feet-inches-eighths with dashes, e.g. 3-4-5 for 3 ft 4 5/8 in, 3-4-5+ for 3 ft 4 11/16 in`;
+  `'${t}' is not feet-inches-eighths: write feet-inches-eighths with dashes, e.g. 3-4-5 for 3 ft 4 5/8 in, 3-4-5+ for 3 ft 4 11/16 in, 3-4-5- for 3 ft 4 9/16 in`;
 
 /**
  * Read feet-inches-eighths text. Returns the length in feet, or a string saying why the
@@ -28,6 +29,7 @@ const shape = (t: string): string =>
  * file). Surrounding spaces are ignored.
  *
  * @example scanFeetInches('3-4-5+') // 3 + 4.6875 / 12 = 3.390625
+ * @example scanFeetInches('3-4-5-') // 3 + 4.5625 / 12 = 3.380208333...
  */
 export function scanFeetInches(text: string): number | string {
   const t = text.trim();
@@ -53,13 +55,14 @@ export function scanFeetInches(text: string): number | string {
   if (!(e >= ZERO && e <= NINE)) return shape(t);
   const eighths = e - ZERO;
   i++;
-  const plus = t.charCodeAt(i) === PLUS;
-  if (plus) i++;
+  const sign = t.charCodeAt(i);
+  const sixteenth = sign === PLUS ? 1 : sign === DASH ? -1 : 0;
+  if (sixteenth !== 0) i++;
   if (i !== n) return shape(t);
 
   if (inches > 11) return `'${t}': inches ${inches} must be 0 to 11`;
   if (eighths > 7) return `'${t}': eighths ${eighths} must be 0 to 7`;
-  const sixteenths = feet * SIXTEENTHS_PER_FOOT + inches * 16 + eighths * 2 + (plus ? 1 : 0);
+  const sixteenths = feet * SIXTEENTHS_PER_FOOT + inches * 16 + eighths * 2 + sixteenth;
   const value = sixteenths / SIXTEENTHS_PER_FOOT;
   // 309 or more digits of feet overflow a double: an error, never an infinite length.
   if (!Number.isFinite(value)) return `'${t.slice(0, 24)}...' ${FEET_TOO_LARGE}`;

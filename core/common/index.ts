@@ -8,6 +8,8 @@ export * from './draftList.js';
 export * from './errors.js';
 export * from './feetInches.js';
 export * from './hullName.js';
+export * from './lengthWords.js';
 export * from './limits.js';
 export * from './numberList.js';
+export * from './typedLength.js';
 export * from './units.js';

@@ -30,6 +30,14 @@ export function lengthFactor(u: LengthUnit): number {
   return METRES_PER[u];
 }
 
+/**
+ * The unit system of results and of lengths typed in a request: SI (m, t; the default)
+ * or imperial (ft, long tons; core/report/imperial.ts converts results).
+ */
+export type UnitSystem = 'si' | 'imperial';
+
+export const UNIT_SYSTEMS = ['si', 'imperial'] as const satisfies readonly UnitSystem[];
+
 export function isLengthUnit(text: string): text is LengthUnit {
   return (LENGTH_UNITS as readonly string[]).includes(text);
 }

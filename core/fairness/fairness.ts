@@ -64,6 +64,9 @@ export interface FairnessWarning {
   /** The lines along which it was found. */
   readonly along: readonly ('waterline' | 'section' | 'line')[];
   readonly message: string;
+  /** Line and column of the offset in the file it was read from (core/fairness/fairnessInFile.ts); absent for a JSON model. */
+  readonly line?: number;
+  readonly column?: number;
 }
 
 /**

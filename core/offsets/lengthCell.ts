@@ -4,7 +4,7 @@
  * the one number syntax of every input (core/common/decimal.ts): no hexadecimal, no
  * thousands separators.
  */
-import { isDecimal } from '../common/decimal.js';
+import { decimalCommaAsPoint, isDecimal } from '../common/decimal.js';
 import { FEET_TOO_LARGE, scanFeetInches } from '../common/feetInches.js';
 import type { LengthUnit } from '../common/units.js';
 
@@ -23,10 +23,15 @@ function notFiniteSpelling(t: string): boolean {
 
 const notFinite = (t: string): CellFault => ({ code: 'HYD_CELL_NOT_FINITE', why: `${t} is not a finite number` });
 
-/** Read a trimmed, non-blank cell as a plain number (knuckle flags aside, for cells that are not lengths). */
-export function readNumber(t: string): number | CellFault {
-  if (isDecimal(t)) {
-    const v = Number(t);
+/**
+ * Read a trimmed, non-blank cell as a plain number (knuckle flags aside, for cells that
+ * are not lengths). With `decimalComma` (a file split on semicolons or tabs) `0,25` reads
+ * as 0.25 (core/common/decimal.ts decimalCommaAsPoint).
+ */
+export function readNumber(t: string, decimalComma = false): number | CellFault {
+  const s = decimalComma ? decimalCommaAsPoint(t) : t;
+  if (isDecimal(s)) {
+    const v = Number(s);
     return Number.isFinite(v) ? v : { code: 'HYD_CELL_NOT_FINITE', why: `${t} is too large to be a finite number` };
   }
   if (notFiniteSpelling(t)) return notFinite(t);
@@ -37,8 +42,8 @@ export function readNumber(t: string): number | CellFault {
  * Read a trimmed, non-blank cell as a length in the file's unit: a plain number for
  * m, mm, ft and in, feet-inches-eighths (as feet) for ft-in-8.
  */
-export function readLength(t: string, unit: LengthUnit): number | CellFault {
-  if (unit !== 'ft-in-8') return readNumber(t);
+export function readLength(t: string, unit: LengthUnit, decimalComma = false): number | CellFault {
+  if (unit !== 'ft-in-8') return readNumber(t, decimalComma);
   const v = scanFeetInches(t);
   if (typeof v === 'number') return v;
   if (notFiniteSpelling(t)) return notFinite(t);

@@ -17,7 +17,7 @@ import { LIMITS } from '../common/limits.js';
 import { readLength } from './lengthCell.js';
 import { csvIssue } from './offsetsIssue.js';
 import { deckAtTopWaterlineWarning, keelAtWaterlineWarning, type ReadingWarning } from './readingWarnings.js';
-import { cellText, type BodyRead, type Sheet } from './offsetsSheet.js';
+import { cellText, hasCellsBeyond, type BodyRead, type Sheet } from './offsetsSheet.js';
 
 /** The optional columns of the grid form, in the order they may appear. */
 export const GRID_EXTRA_COLUMNS = ['keel_z', 'deck_z', 'deck_y'] as const;
@@ -64,11 +64,13 @@ export function readGridHeader(sheet: Sheet): GridHeader {
       issues.push(csvIssue('HYD_HEADER', line, c + 1, undefined, 'waterline height is blank; every header cell after x must be a height'));
       continue;
     }
-    const v = readLength(t, sheet.unit);
+    const v = readLength(t, sheet.unit, sheet.decimalComma);
     if (typeof v === 'number') waterlines.push(v * sheet.factor);
     else {
       const named = /^[a-z_]+$/i.test(t) ? `; the optional columns ${GRID_EXTRA_COLUMNS.join(', ')} come right after x` : '';
-      issues.push(csvIssue('HYD_HEADER', line, c + 1, undefined, `waterline height ${v.why}${named}`));
+      const withUnit = /^[-+]?[\d.,]+(?:e[-+]?\d+)?\s*\(?(m|mm|ft|in)\)?$/i.exec(t);
+      const unitHint = withUnit === null ? '' : `; write heights as plain numbers and the unit once, in the x header cell (x (${withUnit[1]!.toLowerCase()})) or a '# units:' line`;
+      issues.push(csvIssue('HYD_HEADER', line, c + 1, undefined, `waterline height ${v.why}${named}${unitHint}`));
     }
   }
   return { waterlines, first, extra, issues };
@@ -95,11 +97,11 @@ export function readGridBody(sheet: Sheet, head: Pick<GridHeader, 'waterlines' |
   for (let r = 0; r < rows.length; r++) {
     const cells = rows[r]!;
     const line = rowLines[r]!;
-    if (cells.length > ncol) {
-      issues.push(csvIssue('HYD_ROW_LENGTH', line, ncol + 1, undefined, `the row has ${cells.length} cells but the header has ${ncol}`));
+    if (cells.length > ncol && hasCellsBeyond(cells, ncol)) {
+      issues.push(csvIssue('HYD_ROW_LENGTH', line, ncol + 1, undefined, `the row has ${cells.length} cells but the header has ${ncol}; cells beyond the header must be blank`));
     }
     const xt = cellText(cells, 0);
-    const xv = xt === '' ? undefined : readLength(xt, unit);
+    const xv = xt === '' ? undefined : readLength(xt, unit, sheet.decimalComma);
     if (typeof xv !== 'number') {
       issues.push(csvIssue(xv === undefined ? 'HYD_CELL_NOT_NUMBER' : xv.code, line, 1, undefined,
         xv === undefined ? 'station x is blank; every row starts with its station x' : `station x ${xv.why}`));
@@ -117,7 +119,7 @@ export function readGridBody(sheet: Sheet, head: Pick<GridHeader, 'waterlines' |
       if (c === undefined) return undefined;
       const t = cellText(cells, c);
       if (t === '') return undefined;
-      const v = readLength(t, unit);
+      const v = readLength(t, unit, sheet.decimalComma);
       if (typeof v === 'number') return v * factor;
       issues.push(csvIssue(v.code, line, c + 1, where(c), `${name} ${v.why}`));
       tainted.add(i);
@@ -144,7 +146,7 @@ export function readGridBody(sheet: Sheet, head: Pick<GridHeader, 'waterlines' |
           `${span} between defined half-breadths; the defined cells of a row must be one unbroken run (blanks may only lead or trail it)`));
       }
       state = 1;
-      const v = readLength(t, unit);
+      const v = readLength(t, unit, sheet.decimalComma);
       if (typeof v !== 'number') {
         issues.push(csvIssue(v.code, line, c + 1, `station x = ${xt}${label}, WL ${header[c]}${label}`, `half-breadth ${v.why}`));
         tainted.add(i);
@@ -155,7 +157,8 @@ export function readGridBody(sheet: Sheet, head: Pick<GridHeader, 'waterlines' |
     }
     const lowest = points[0];
     if (keelZ === undefined && lowest !== undefined && lowest.y > 0 && lowest.z > waterlines[0]!) {
-      notes.push(keelAtWaterlineWarning(i, xv * factor, lowest.z, lowest.y, line));
+      const c0 = cols[0]!;
+      notes.push(keelAtWaterlineWarning(i, { x: xt, z: header[c0]!, y: cellText(cells, c0), label }, line, c0 + 1));
     }
     const highest = points[points.length - 1];
     if (deckZ === undefined && highest !== undefined && highest.z === waterlines[waterlines.length - 1]) {

@@ -38,8 +38,10 @@ export interface MetadataLength {
 
 export interface Metadata {
   readonly name: string | undefined;
-  /** The file's unit; `m` when not given. Undefined when the `units` line is malformed. */
+  /** The file's unit; `fallbackUnits` (else `m`) when not given. Undefined when the `units` line is malformed. */
   readonly units: LengthUnit | undefined;
+  /** The line of the `units` line, when there is one. */
+  readonly unitsLine: number | undefined;
   readonly ap: MetadataLength | undefined;
   readonly fp: MetadataLength | undefined;
   /** True when an `ap` or `fp` line was given but could not be read. */
@@ -52,8 +54,15 @@ export interface CommentLine {
   readonly text: string;
 }
 
+export interface MetadataOptions {
+  /** The unit when there is no units line (from the x header cell or the request), else `m`. */
+  readonly fallbackUnits?: LengthUnit | undefined;
+  /** Read ap and fp with a decimal comma (a file split on semicolons or tabs). */
+  readonly decimalComma?: boolean;
+}
+
 /** Read the comment lines that come before the header. */
-export function readMetadata(comments: readonly CommentLine[]): Metadata {
+export function readMetadata(comments: readonly CommentLine[], options: MetadataOptions = {}): Metadata {
   const issues: Issue[] = [];
   const given = new Map<MetadataKey, { line: number; value: string }>();
   for (const c of comments) {
@@ -75,7 +84,7 @@ export function readMetadata(comments: readonly CommentLine[]): Metadata {
     given.set(m.key, { line: c.line, value: m.value });
   }
 
-  let units: LengthUnit | undefined = 'm';
+  let units: LengthUnit | undefined = options.fallbackUnits ?? 'm';
   const u = given.get('units');
   if (u !== undefined) {
     if (isLengthUnit(u.value)) units = u.value;
@@ -97,7 +106,7 @@ export function readMetadata(comments: readonly CommentLine[]): Metadata {
   const length = (key: 'ap' | 'fp'): MetadataLength | undefined => {
     const g = given.get(key);
     if (g === undefined || units === undefined) return undefined;
-    const v = g.value === '' ? undefined : readLength(g.value, units);
+    const v = g.value === '' ? undefined : readLength(g.value, units, options.decimalComma);
     if (typeof v === 'number') return { value: v, text: g.value, line: g.line };
     perpendicularFault = true;
     const why = v === undefined ? 'is blank' : v.why;
@@ -106,7 +115,7 @@ export function readMetadata(comments: readonly CommentLine[]): Metadata {
   };
   const ap = length('ap');
   const fp = length('fp');
-  return { name, units, ap, fp, perpendicularFault, issues };
+  return { name, units, unitsLine: u?.line, ap, fp, perpendicularFault, issues };
 }
 
 /** A comment after the header that looks like metadata other than the caution: an issue, else undefined. */

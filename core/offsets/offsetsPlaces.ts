@@ -12,7 +12,7 @@ import type { Issue } from '../common/errors.js';
 import type { HullModel } from '../hull/hullModel.js';
 import type { Metadata } from './offsetsMetadata.js';
 import { csvIssue } from './offsetsIssue.js';
-import { cellText, type BodyRead, type Sheet } from './offsetsSheet.js';
+import { cellText, type BodyRead, type Sheet, type SourceMap } from './offsetsSheet.js';
 
 interface Spot {
   readonly line?: number | undefined;
@@ -30,6 +30,37 @@ export interface PlaceContext {
   readonly hull: HullModel;
 }
 
+/** Where a point of the model was written in the file: its line, the column of `field` (of the point's cell in a grid), the station and waterline in words, and the cell's text. */
+export interface FilePlace {
+  readonly line?: number | undefined;
+  readonly column?: number | undefined;
+  readonly where?: string | undefined;
+  readonly text?: string | undefined;
+}
+
+/** The place in the file of point `j` of station `i` of the model read from `sheet` (see SourceMap). */
+export function pointPlace(sheet: Sheet, map: SourceMap, i: number, j: number, field: 'y' | 'z' | undefined): FilePlace {
+  const { rows, rowLines, header, label } = sheet;
+  if (i >= map.stationRow.length) return {};
+  if (map.form === 'grid') {
+    const r = map.stationRow[i]!;
+    const c = map.pointCol[i]![j];
+    const xt = cellText(rows[r]!, 0);
+    if (c === undefined) return { line: rowLines[r], where: `station x = ${xt}${label}` };
+    const text = field === 'z' ? header[c] : cellText(rows[r]!, c);
+    // A keel or deck-edge point comes from its own column (keel_z, deck_y), not a waterline.
+    const place = c < map.first ? `${header[c]}` : `WL ${header[c]}${label}`;
+    return { line: rowLines[r], column: c + 1, where: `station x = ${xt}${label}, ${place}`, text };
+  }
+  const r = map.pointRow[i]![j];
+  if (r === undefined) return {};
+  const xt = cellText(rows[map.stationRow[i]!]!, map.xCol);
+  const zt = cellText(rows[r]!, map.zCol);
+  const column = field === 'y' ? map.yCol + 1 : field === 'z' ? map.zCol + 1 : undefined;
+  const text = field === 'z' ? zt : cellText(rows[r]!, map.yCol);
+  return { line: rowLines[r], column, where: `station x = ${xt}${label}, point z = ${zt}${label}`, text };
+}
+
 /** The file issues for the model issues of `checkHull`, in the same order, consequences dropped. */
 export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Issue[] {
   const { sheet, body, meta, hull } = ctx;
@@ -43,22 +74,7 @@ export function placeHullIssues(found: readonly Issue[], ctx: PlaceContext): Iss
     return { line: rowLines[r], where: `station x = ${xt}${label}`, text: xt };
   };
   const xSpot = (i: number): Spot => ({ ...stationSpot(i), column: map.form === 'grid' ? 1 : map.xCol + 1 });
-  const pointSpot = (i: number, j: number, field: 'y' | 'z' | undefined): Spot => {
-    const st = stationSpot(i);
-    if (map.form === 'grid') {
-      const r = map.stationRow[i]!;
-      const c = map.pointCol[i]![j]!;
-      const text = field === 'z' ? header[c] : cellText(rows[r]!, c);
-      // A keel or deck-edge point comes from its own column (keel_z, deck_y), not a waterline.
-      const place = c < map.first ? `${header[c]}` : `WL ${header[c]}${label}`;
-      return { line: st.line, column: c + 1, where: `${st.where}, ${place}`, text };
-    }
-    const r = map.pointRow[i]![j]!;
-    const zt = cellText(rows[r]!, map.zCol);
-    const column = field === 'y' ? map.yCol + 1 : field === 'z' ? map.zCol + 1 : undefined;
-    const text = field === 'z' ? zt : cellText(rows[r]!, map.yCol);
-    return { line: rowLines[r], column, where: `${st.where}, point z = ${zt}${label}`, text };
-  };
+  const pointSpot = (i: number, j: number, field: 'y' | 'z' | undefined): Spot => pointPlace(sheet, map, i, j, field);
   const firstWl = map.form === 'grid' ? map.first : 1;
   const waterlineSpot = (k: number): Spot => ({ line: headerLine, column: k + firstWl + 1, where: `WL ${header[k + firstWl]}${label}`, text: header[k + firstWl] });
 

@@ -9,7 +9,7 @@ import type { Point, Station } from '../hull/hullModel.js';
 import { LIMITS } from '../common/limits.js';
 import { readLength } from './lengthCell.js';
 import { csvIssue } from './offsetsIssue.js';
-import { cellText, type BodyRead, type Sheet } from './offsetsSheet.js';
+import { cellText, hasCellsBeyond, type BodyRead, type Sheet } from './offsetsSheet.js';
 
 export const POINT_COLUMNS = ['x', 'y', 'z', 'knuckle'] as const;
 type PointColumn = (typeof POINT_COLUMNS)[number];
@@ -72,11 +72,11 @@ export function readPointsBody(sheet: Sheet, columns: PointColumns): BodyRead {
   for (let r = 0; r < rows.length; r++) {
     const cells = rows[r]!;
     const line = rowLines[r]!;
-    if (cells.length > ncol) {
-      issues.push(csvIssue('HYD_ROW_LENGTH', line, ncol + 1, undefined, `the row has ${cells.length} cells but the header has ${ncol}`));
+    if (cells.length > ncol && hasCellsBeyond(cells, ncol)) {
+      issues.push(csvIssue('HYD_ROW_LENGTH', line, ncol + 1, undefined, `the row has ${cells.length} cells but the header has ${ncol}; cells beyond the header must be blank`));
     }
     const xt = cellText(cells, columns.x);
-    const xv = xt === '' ? undefined : readLength(xt, unit);
+    const xv = xt === '' ? undefined : readLength(xt, unit, sheet.decimalComma);
     if (typeof xv !== 'number') {
       issues.push(csvIssue(xv === undefined ? 'HYD_CELL_NOT_NUMBER' : xv.code, line, columns.x + 1, undefined,
         xv === undefined ? 'x is blank; every point needs x, y and z' : `station x ${xv.why}`));
@@ -103,8 +103,8 @@ export function readPointsBody(sheet: Sheet, columns: PointColumns): BodyRead {
     const zt = cellText(cells, columns.z);
     const yt = cellText(cells, columns.y);
     const station = `station x = ${xt}${label}`;
-    const zv = zt === '' ? undefined : readLength(zt, unit);
-    const yv = yt === '' ? undefined : readLength(yt, unit);
+    const zv = zt === '' ? undefined : readLength(zt, unit, sheet.decimalComma);
+    const yv = yt === '' ? undefined : readLength(yt, unit, sheet.decimalComma);
     const where = typeof zv === 'number' ? `${station}, point z = ${zt}${label}` : station;
     if (typeof yv !== 'number') {
       issues.push(csvIssue(yv === undefined ? 'HYD_CELL_NOT_NUMBER' : yv.code, line, columns.y + 1, where,

@@ -20,6 +20,8 @@ export interface Sheet {
   readonly rows: readonly (readonly string[])[];
   /** 1-based line of each row. */
   readonly rowLines: readonly number[];
+  /** True when the cells are split on a semicolon or a tab, so that `0,25` is a decimal comma. */
+  readonly decimalComma?: boolean;
 }
 
 export const unitLabel = (u: LengthUnit): string => (u === 'ft-in-8' ? '' : ` ${u}`);
@@ -29,6 +31,15 @@ export const cellText = (row: readonly string[], c: number): string => {
   const t = row[c];
   return t === undefined ? '' : t.trim();
 };
+
+/**
+ * True when a row has a cell holding more than spaces beyond the header's `ncol` columns.
+ * Blank cells there are what a spreadsheet writes for empty columns and are ignored.
+ */
+export function hasCellsBeyond(row: readonly string[], ncol: number): boolean {
+  for (let c = ncol; c < row.length; c++) if (row[c]!.trim() !== '') return true;
+  return false;
+}
 
 /**
  * Where each part of the model came from. Grid: the row of each station and the column

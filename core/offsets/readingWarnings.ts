@@ -37,16 +37,24 @@ export const LONGEST_PLAUSIBLE_LBP = 400;
 const m3 = (v: number): string => String(Number(v.toFixed(3)));
 
 /**
- * The warning for a grid row whose keel was taken at the tabulated waterline `z` (its
- * lowest defined cell, half-breadth `y`, with blanks below and no keel_z given).
+ * The warning for a grid row whose keel was taken at a tabulated waterline (its lowest
+ * defined cell, with blanks below and no keel_z given). The values are as the file
+ * writes them, in its own units (`label`: ` m`, ` mm`, nothing for feet-inches-eighths),
+ * at the cell's line and column.
  */
-export function keelAtWaterlineWarning(station: number, x: number, z: number, y: number, line: number): ReadingWarning {
+export function keelAtWaterlineWarning(
+  station: number,
+  cell: { readonly x: string; readonly z: string; readonly y: string; readonly label: string },
+  line: number,
+  column: number,
+): ReadingWarning {
+  const { x, z, y, label } = cell;
   return {
     code: 'HYD_KEEL_AT_WATERLINE',
-    path: ['offsets', line],
+    path: ['offsets', line, column],
     message:
-      `line ${line}, station x = ${m3(x)} m: the keel is taken at WL ${m3(z)} m, the lowest waterline with an offset, with a flat of ` +
-      `bottom ${m3(y)} m wide each side; if the keel lies lower, between waterlines, give its height in a keel_z column (station ${station + 1})`,
+      `line ${line}, column ${column} (station x = ${x}${label}, WL ${z}${label}): the keel is taken at this waterline, the lowest with an offset, with a flat of ` +
+      `bottom ${y}${label} wide each side; if the keel lies lower, between waterlines, give its height in a keel_z column (station ${station + 1})`,
   };
 }
 

@@ -1,30 +1,22 @@
 /**
- * The hydrostatic table in its three output forms: JSON, CSV with unit-suffixed
- * headers, and an aligned text table. Pure: callers write the text where they like.
- * Every form carries the caution.
+ * The hydrostatic table as an answer (core/report/answerForm.ts): its result, the unit of
+ * each number, its columns (HYDROSTATIC_FIELDS) and the lines that say what it is of.
+ * With the integration-error estimate (core/upright/errorEstimate.ts) each row also
+ * carries `errorEstimate` and the table a column per estimated quantity. JSON, CSV and
+ * text, SI or imperial, all columns or some, come from the shared step. Every form
+ * carries the caution.
  */
-import Papa from 'papaparse';
 import { CAUTION } from '../common/caution.js';
-import { csvSafeText } from '../common/csvSafe.js';
-import { alignedTable, textCell } from './textTable.js';
 import { coefficientNotes } from '../upright/coefficientNotes.js';
+import { ERROR_ESTIMATE_FIELDS, type ErrorEstimates, type Halving } from '../upright/errorEstimate.js';
 import { HYDROSTATIC_FIELDS, type HydrostaticRow } from '../upright/hydrostaticFields.js';
-import { perpendiculars, type HullModel } from '../hull/hullModel.js';
+import type { HullModel } from '../hull/hullModel.js';
+import { writeAnswer, type AnswerForm, type Row, type TableColumn } from './answerForm.js';
+import { DEFAULT_OUTPUT } from './outputOptions.js';
+import { datumLine, HULL_UNITS, hullSummary, type HullSummary } from './resultParts.js';
+import { SI_CONVERTER, type Converter, type UnitTree } from './unitConversion.js';
 
-/** What a result says of the hull it came from. */
-export interface HullSummary {
-  name: string;
-  stations: number;
-  waterlines: number | null;
-  ap: number;
-  fp: number;
-  lbp: number;
-}
-
-export function hullSummary(hull: HullModel): HullSummary {
-  const p = perpendiculars(hull);
-  return { name: hull.name, stations: hull.stations.length, waterlines: hull.waterlines?.length ?? null, ap: p.ap, fp: p.fp, lbp: p.lbp };
-}
+export { csvHeader, csvPreamble, hullSummary, toJson, type HullSummary } from './resultParts.js';
 
 export interface HydrostaticResult {
   hull: HullSummary;
@@ -35,48 +27,97 @@ export interface HydrostaticResult {
   notes: string[];
 }
 
-export function hydrostaticResult(hull: HullModel, density: number, rows: HydrostaticRow[]): HydrostaticResult {
-  return { hull: hullSummary(hull), density, caution: CAUTION, rows, notes: coefficientNotes(rows) };
+/** The table with each row's estimate of its integration error (exact minus computed), and why some are not given. */
+export interface EstimatedResult extends Omit<HydrostaticResult, 'rows'> {
+  rows: (HydrostaticRow & { errorEstimate: Record<string, number> })[];
+  /** How the coarse hull of the estimate was made. */
+  halving: Halving;
+  /** Why estimates are not given, each reason once with its drafts. */
+  errorNotes: string[];
 }
 
-const UNIT_SLUG: Record<string, string> = { m: 'm', m2: 'm2', m3: 'm3', m4: 'm4', t: 't', 't/cm': 't_per_cm', 't.m/cm': 'tm_per_cm', '-': '' };
-
-/** CSV header of a field: its name with the unit as a suffix (`volume_m3`); none for coefficients. */
-export function csvHeader(key: string, unit: string): string {
-  const slug = UNIT_SLUG[unit] ?? unit.replace(/[^a-z0-9]+/gi, '_');
-  return slug === '' ? key : `${key}_${slug}`;
+/** The result of the table; `conv` writes the drafts of the notes in the answer's units. */
+export function hydrostaticResult(hull: HullModel, density: number, rows: HydrostaticRow[], conv: Converter = SI_CONVERTER): HydrostaticResult {
+  return { hull: hullSummary(hull), density, caution: CAUTION, rows, notes: coefficientNotes(rows, conv.length) };
 }
 
-/** JSON text of a result: NaN (an undefined coefficient) is written as null. */
-export function toJson(value: unknown): string {
-  return JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2);
+/** Each reason once, with the drafts it holds at: "drafts 1 m; 1.2 m: <reason>". */
+function groupedNotes(drafts: readonly number[], reasons: readonly (readonly string[])[], length: (m: number) => string): string[] {
+  const byReason = new Map<string, number[]>();
+  drafts.forEach((d, i) => {
+    for (const r of reasons[i] ?? []) {
+      const list = byReason.get(r) ?? [];
+      list.push(d);
+      byReason.set(r, list);
+    }
+  });
+  return [...byReason].map(([r, ds]) => `draft${ds.length > 1 ? 's' : ''} ${ds.map(length).join('; ')}: ${r}`);
 }
 
-/**
- * Leading comment lines of every CSV result: the caution, then what the table is of.
- * Line breaks and commas become spaces, so each line stays one cell led by `#`. A
- * spreadsheet may also split on a semicolon (where the decimal mark is a comma) or a
- * tab when it imports; one of those followed by =, +, - or @ would start a formula cell
- * (a hull name such as `a;=1+2`), so it becomes a space too. Our own `;` between
- * phrases stays.
- */
-export function csvPreamble(lines: readonly string[]): string {
-  // Commas go, so a line stays one cell for a reader that splits on them; csvSafeText makes it safe for the others.
-  const tidy = (l: string): string => csvSafeText(l.replace(/,+/g, ' '));
-  return [`# ${CAUTION}`, ...lines.map((l) => `# ${tidy(l)}`)].join('\r\n') + '\r\n';
+/** The table with the estimates of `errorEstimates` put on its rows. */
+export function estimatedResult(hull: HullModel, density: number, rows: HydrostaticRow[], est: ErrorEstimates, conv: Converter = SI_CONVERTER): EstimatedResult {
+  return {
+    ...hydrostaticResult(hull, density, rows, conv),
+    rows: rows.map((r, i) => ({ ...r, errorEstimate: { ...est.estimates[i]! } })),
+    halving: est.halving,
+    errorNotes: groupedNotes(rows.map((r) => r.draft), est.unreliable, conv.length),
+  };
 }
 
-/** The hydrostatic table as CSV: caution line, hull and density lines, header, one row per draft. */
+const ROW_UNITS: Record<string, UnitTree> = Object.fromEntries(HYDROSTATIC_FIELDS.map((f) => [f.key, f.unit]));
+const ESTIMATE_UNITS: Record<string, UnitTree> = Object.fromEntries(ERROR_ESTIMATE_FIELDS.map((f) => [f.key, f.unit]));
+
+function tableLines(r: HydrostaticResult, ctx: Parameters<AnswerForm<HydrostaticResult>['lines']>[1]): string[] {
+  const u = ctx.u('m');
+  return [
+    `hull: ${r.hull.name}`,
+    ctx.conv.system === 'si'
+      ? `density: ${r.density} t/m3`
+      : `density: ${r.density} t/m3; units: feet and long tons (1 ft = 0.3048 m; 1 long ton = 1016.0469088 kg); TPI in long tons per inch and MTI in long ton-feet per inch`,
+    `${datumLine(r.hull, ctx.n, u)}; LBP ${ctx.n(r.hull.lbp)} ${u}; ${r.hull.stations} stations`,
+  ];
+}
+
+/** The hydrostatic table's answer form. */
+export const HYDROSTATICS_FORM: AnswerForm<HydrostaticResult> = {
+  units: { hull: HULL_UNITS, rows: [ROW_UNITS] },
+  columns: HYDROSTATIC_FIELDS,
+  rowsKey: 'rows',
+  lines: tableLines,
+  notes: (r) => r.notes,
+};
+
+const ESTIMATE_COLUMNS: readonly TableColumn[] = ERROR_ESTIMATE_FIELDS.map((q) => ({
+  key: `${q.key}Error`,
+  unit: q.unit,
+  label: `err ${HYDROSTATIC_FIELDS.find((f) => f.key === q.key)!.label}`,
+}));
+
+/** The form of the table with its error estimates: a column per estimated quantity after the fields. */
+export const ESTIMATED_FORM: AnswerForm<EstimatedResult> = {
+  units: { hull: HULL_UNITS, rows: [{ ...ROW_UNITS, errorEstimate: ESTIMATE_UNITS }] },
+  columns: [...HYDROSTATIC_FIELDS, ...ESTIMATE_COLUMNS],
+  rows: (r) =>
+    r.rows.map((row): Row => {
+      const flat: Record<string, unknown> = { ...row };
+      for (const [k, v] of Object.entries(row.errorEstimate)) flat[`${k}Error`] = v;
+      return flat;
+    }),
+  lines: (r, ctx) => [
+    ...tableLines(r, ctx),
+    "error estimates: exact minus computed by halving (every second station and waterline) and Richardson extrapolation for Simpson's h^4; given only where a third level confirms the h^4 law and the halving keeps the hull's features",
+    ...r.halving.notes.map((n) => `error estimate: ${n}`),
+    ...r.errorNotes.map((n) => `error estimate not given at ${n}`),
+  ],
+  notes: (r) => r.notes,
+};
+
+/** The hydrostatic table as CSV in SI with every column (the shared step's defaults). */
 export function hydrostaticsCsv(result: HydrostaticResult): string {
-  const header = HYDROSTATIC_FIELDS.map((f) => csvHeader(f.key, f.unit));
-  const data = result.rows.map((r) => HYDROSTATIC_FIELDS.map((f) => (Number.isFinite(r[f.key]) ? r[f.key] : '')));
-  const preamble = csvPreamble([`hull: ${result.hull.name}`, `density: ${result.density} t/m3`, ...result.notes]);
-  return preamble + Papa.unparse({ fields: header, data }, { newline: '\r\n' }) + '\r\n';
+  return writeAnswer(HYDROSTATICS_FORM, result, 'csv', DEFAULT_OUTPUT, SI_CONVERTER);
 }
 
-/** An aligned text table with a units line, for the terminal. */
+/** The hydrostatic table as an aligned text table with a units line, for the terminal. */
 export function hydrostaticsText(result: HydrostaticResult): string {
-  const columns = HYDROSTATIC_FIELDS.map((f) => ({ label: f.label, unit: f.unit, cells: result.rows.map((r) => textCell(r[f.key], f.unit)) }));
-  const title = `${result.hull.name}: ${result.hull.stations} stations, LBP ${result.hull.lbp.toFixed(3)} m, density ${result.density} t/m3`;
-  return alignedTable([title], columns, result.rows.length, result.notes);
+  return writeAnswer(HYDROSTATICS_FORM, result, 'table', DEFAULT_OUTPUT, SI_CONVERTER);
 }

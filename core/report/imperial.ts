@@ -16,6 +16,7 @@
  */
 import { unit } from 'mathjs';
 import { HYDROSTATIC_FIELDS, type HydrostaticField, type HydrostaticRow } from '../upright/hydrostaticFields.js';
+import type { Converter } from './unitConversion.js';
 
 const POUNDS_PER_LONG_TON = 2240;
 
@@ -44,7 +45,7 @@ export const IMPERIAL_UNITS: Readonly<Record<string, { unit: string; factor: num
 };
 
 /** Fields whose name changes with the unit: TPC becomes TPI, MCT1cm becomes MTI. */
-const RENAMED: Partial<Record<HydrostaticField, { key: string; label: string; description: string }>> = {
+const RENAMED: Readonly<Record<string, { key: string; label: string; description: string }>> = {
   tpc: { key: 'tpi', label: 'TPI', description: 'long tons per inch immersion' },
   mct1cm: { key: 'mti', label: 'MTI', description: 'moment to change trim one inch (GML taken as BML)' },
 };
@@ -62,7 +63,7 @@ export interface ImperialField {
 /** The hydrostatic fields in imperial units, in the order of HYDROSTATIC_FIELDS. */
 export const IMPERIAL_FIELDS: readonly ImperialField[] = HYDROSTATIC_FIELDS.map((f) => {
   const u = IMPERIAL_UNITS[f.unit]!;
-  const r = RENAMED[f.key];
+  const r = RENAMED[f.key as string];
   return { from: f.key, key: r?.key ?? f.key, unit: u.unit, label: r?.label ?? f.label, description: r?.description ?? f.description, factor: u.factor };
 });
 
@@ -84,3 +85,19 @@ export function toFeet(metres: number): number {
 export function cubicFeetPerLongTon(density: number): number {
   return LT / density / FT ** 3;
 }
+
+/** Lengths in feet for text: six significant digits. */
+const feetText = (metres: number): string => `${String(Number((metres / FT).toPrecision(6)))} ft`;
+
+/**
+ * The imperial system for core/report/unitConversion.ts: each SI unit's imperial unit and
+ * factor (IMPERIAL_UNITS; a unit not listed, such as t/m3 for density, is kept), TPC and
+ * MCT1cm renamed TPI and MTI wherever they appear in a result.
+ */
+export const IMPERIAL_CONVERTER: Converter = {
+  system: 'imperial',
+  unit: (u) => IMPERIAL_UNITS[u] ?? { unit: u, factor: 1 },
+  key: (k, u) => (IMPERIAL_UNITS[u] !== undefined && u !== '-' ? RENAMED[k]?.key ?? k : k),
+  label: (k, l) => RENAMED[k]?.label ?? l,
+  length: feetText,
+};

@@ -1,7 +1,8 @@
 /**
  * Aligned text tables for the terminal: a heading line, a units line, the rows, then
- * the caution. Numbers are shown to a fixed number of decimals by unit (JSON and CSV
- * keep full precision); one place for both unit systems.
+ * the caution. Numbers are shown to a fixed number of decimals by unit, or to three
+ * significant digits where the decimals would hide a small value (JSON and CSV keep the
+ * answer's digits); one place for both unit systems.
  */
 import { CAUTION } from '../common/caution.js';
 
@@ -12,9 +13,34 @@ export const TEXT_DECIMALS: Readonly<Record<string, number>> = {
   '-': 4,
 };
 
-/** A number for a text table: fixed decimals by unit, `-` where undefined. */
+/** Significant digits a text cell shows at least: fewer fixed decimals would print a small craft's MCT 1 cm as 0.000. */
+export const TEXT_SIGNIFICANT = 3;
+
+/** Significant digits of a number written with fixed decimals (`0.012` has 2, `0.000` none). */
+function significantOf(fixed: string): number {
+  let n = 0;
+  let leading = true;
+  for (const ch of fixed) {
+    if (ch < '0' || ch > '9') continue;
+    if (leading && ch === '0') continue;
+    leading = false;
+    n++;
+  }
+  return n;
+}
+
+/**
+ * A number for a text table: fixed decimals by unit, so a column lines up; where that
+ * would show fewer than three significant digits of a value that is not zero, the value
+ * to three significant digits instead (0.000412, not 0.000); `-` where undefined.
+ * @example textCell(0.000412, 't.m/cm') // '0.000412'
+ * @example textCell(13.79, 'm3') // '13.790'
+ */
 export function textCell(value: number, unit: string): string {
-  return Number.isFinite(value) ? value.toFixed(TEXT_DECIMALS[unit] ?? 3) : '-';
+  if (!Number.isFinite(value)) return '-';
+  const fixed = value.toFixed(TEXT_DECIMALS[unit] ?? 3);
+  if (value === 0 || significantOf(fixed) >= TEXT_SIGNIFICANT || Math.abs(value) >= 1) return fixed;
+  return String(Number(value.toPrecision(TEXT_SIGNIFICANT)));
 }
 
 export interface TextColumn {

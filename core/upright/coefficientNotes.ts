@@ -32,8 +32,8 @@ const REASON: Readonly<Record<'cb' | 'cm' | 'cp' | 'cwp', string>> = {
 
 const d3 = (v: number): string => String(Number(v.toPrecision(6)));
 
-/** A sentence for every coefficient a row does not give, with the ratio it would have had. */
-export function coefficientNotes(rows: readonly HydrostaticRow[]): string[] {
+/** A sentence for every coefficient a row does not give, with the ratio it would have had; `length` writes the draft (in metres by default). */
+export function coefficientNotes(rows: readonly HydrostaticRow[], length: (metres: number) => string = (m) => `${d3(m)} m`): string[] {
   const out: string[] = [];
   for (const r of rows) {
     const raw: Record<'cb' | 'cm' | 'cp' | 'cwp', [number, number]> = {
@@ -47,8 +47,8 @@ export function coefficientNotes(rows: readonly HydrostaticRow[]): string[] {
       const [a, b] = raw[key];
       out.push(
         b > 0
-          ? `draft ${d3(r.draft)} m: ${key} is not given: it would be ${d3(a / b)}, above 1, because ${REASON[key]}`
-          : `draft ${d3(r.draft)} m: ${key} is not given: ${key === 'cp' || key === 'cm' ? 'nothing is immersed at amidships' : 'the waterplane has no size'}`,
+          ? `draft ${length(r.draft)}: ${key} is not given: it would be ${d3(a / b)}, above 1, because ${REASON[key]}`
+          : `draft ${length(r.draft)}: ${key} is not given: ${key === 'cp' || key === 'cm' ? 'nothing is immersed at amidships' : 'the waterplane has no size'}`,
       );
     }
   }

@@ -28,6 +28,7 @@
  * Mates, 7th ed. (Butterworth-Heinemann, 2012), ch. 10 (Simpson's rules set out as
  * ordinates, multipliers and products).
  */
+import { metresInWords } from '../common/lengthWords.js';
 import { GL5_T, GL5_W } from '../quadrature/gauss.js';
 import type { Section, SectionPointInput } from '../hull/section.js';
 import { commonSpacing, simpsonPanels, simpsonWeights } from '../quadrature/simpson.js';
@@ -108,13 +109,20 @@ const RULE: Record<number, CutPanel['rule']> = { 2: 'straight line', 3: 'parabol
 
 const fmt = (v: number): string => String(Math.round(v * 1e6) / 1e6);
 
+/** Each panel rule as a checker names it. Common practice, no source. */
+const RULE_WORDS: Record<CutPanel['rule'], string> = {
+  'straight line': 'panel of two ordinates, taken by the trapezoidal rule (the straight line between them)',
+  parabola: "Simpson's first-rule panel (the parabola through its three ordinates)",
+  cubic: "Simpson's second-rule panel (the cubic through its four ordinates)",
+};
+
 /**
  * The vertical sheet of a station's section at a draft. `points` are the station's
  * points as given to the section (keel first); `section` is its fitted section.
  * A draft at or below the keel gives an empty sheet; a draft at or above the deck
  * edge integrates the whole section.
  */
-export function verticalSheet(points: readonly SectionPointInput[], section: Section, draft: number): VerticalSheet {
+export function verticalSheet(points: readonly SectionPointInput[], section: Section, draft: number, len: (metres: number) => string = metresInWords): VerticalSheet {
   const n = points.length;
   const atDraft = section.evaluate(draft);
   const sectionArea = atDraft.area;
@@ -133,7 +141,7 @@ export function verticalSheet(points: readonly SectionPointInput[], section: Sec
       waterlineHalfBreadth: 0,
       area: 0,
       sectionArea,
-      lastPart: `the keel (z = ${fmt(section.zKeel)} m) is at or above the draft: the station is not immersed`,
+      lastPart: `the keel (z = ${len(section.zKeel)}) is at or above the draft: the station is not immersed`,
     };
   }
   // Weights (one side, m) of the ordinates on y(z) runs; NaN marks a point on a curve run.
@@ -195,13 +203,17 @@ export function verticalSheet(points: readonly SectionPointInput[], section: Sec
   const area = 2 * (commonFactor * sum + curveArea);
 
   let lastPart: string;
-  if (draft >= section.zDeck) lastPart = `the draft is at or above the deck edge (z = ${fmt(section.zDeck)} m): the whole section is taken`;
-  else if (cutPanel === null) lastPart = 'the draft is a tabulated height: the ordinates end at the waterline';
+  if (draft >= section.zDeck) lastPart = `the draft is at or above the deck edge (z = ${len(section.zDeck)}): the whole section is taken`;
+  else if (cutPanel === null) lastPart = `the draft ${len(draft)} is the height of an ordinate: the ordinates end at the waterline, each panel whole`;
   else {
-    const hs = cutPanel.heights.map(fmt).join(', ');
+    const hs = cutPanel.heights;
+    const below = Math.max(...hs.filter((z) => z < draft));
+    const above = Math.min(...hs.filter((z) => z > draft));
     lastPart =
-      `the draft lies inside the panel of ordinates at z = ${hs} m: the ${cutPanel.rule} through them is integrated ` +
-      `from z = ${fmt(cutPanel.from)} m to the draft, so the ordinates of that panel above the draft carry multipliers too`;
+      `the draft ${len(draft)} lies between the ordinates at z = ${len(below)} and z = ${len(above)}, inside the ` +
+      `${RULE_WORDS[cutPanel.rule]} of the ordinates at z = ${hs.map(len).join(', ')}; that curve is integrated from the foot of the ` +
+      `panel, z = ${len(cutPanel.from)}, up to the draft (not over the whole panel), which gives the multipliers of the panel's ordinates ` +
+      'shown, so the ordinates above the draft carry multipliers too (often negative: the curve through them shapes the part below the waterline)';
   }
   if (curveParts.length > 0) lastPart += '; runs given at a constant height are taken along the section\'s fitted curve';
   return {

@@ -5,7 +5,7 @@
  * core/report/formatAreas.ts areasCsv.
  */
 import { z } from 'zod';
-import { areasCsv, areasResult, type AreasResult } from '../../core/report/formatAreas.js';
+import { AREAS_FORM, areasResult, type AreasResult } from '../../core/report/formatAreas.js';
 import { sectionalAreaCurve } from '../../core/upright/sectionalAreaCurve.js';
 import { DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
@@ -54,5 +54,5 @@ export const areas: Computation<Params, AreasResult> = {
     requireImmersed(p.draft, curve.volume);
     return areasResult(h.hull, curve);
   },
-  csv: areasCsv,
+  form: () => AREAS_FORM,
 };

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { bonjean as bonjeanData } from '../../core/upright/bonjean.js';
-import { bonjeanCsv, bonjeanResult, type BonjeanResult } from '../../core/report/formatBonjean.js';
+import { BONJEAN_FORM, bonjeanResult, type BonjeanResult } from '../../core/report/formatBonjean.js';
 import { HeightsBody, HeightsQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
@@ -49,5 +49,5 @@ export const bonjean: Computation<Params, BonjeanResult> = {
     return { cells, work: prepareWork(hull) + cells };
   },
   run: (h, p) => bonjeanResult(h.hull, bonjeanData(h.prepared, p.drafts ?? [])),
-  csv: bonjeanCsv,
+  form: () => BONJEAN_FORM,
 };

@@ -7,7 +7,9 @@
 import { z } from 'zod';
 import { CAUTION } from '../../core/common/caution.js';
 import type { HalfbreadthError } from '../../core/common/errors.js';
-import { fairnessWarnings, type FairnessWarning } from '../../core/fairness/fairness.js';
+import type { FairnessWarning } from '../../core/fairness/fairness.js';
+import { fairnessWarningsIn } from '../../core/fairness/fairnessInFile.js';
+import { HULL_UNITS } from '../../core/report/resultParts.js';
 import { checkWarnings, proportionWarnings, type ReadingWarning } from '../../core/offsets/readingWarnings.js';
 import { hullSummary, type HullSummary } from '../../core/report/formatHydrostatics.js';
 import { CautionField, HullFormSchema, HullSummarySchema } from '../responseSchemas.js';
@@ -37,7 +39,9 @@ const FairnessWarningSchema = z
     value: z.number().describe('the offset as given, m'),
     suggested: z.number().describe('a fair value from its neighbours, m'),
     along: z.array(z.enum(['waterline', 'section', 'line'])).describe('the lines along which it was found'),
-    message: z.string(),
+    message: z.string().describe('the place and the values in the offsets file\'s own units and line and column (a JSON model: metres)'),
+    line: z.number().int().optional().describe('line of the offset in the offsets file (none for a JSON model)'),
+    column: z.number().int().optional().describe('column of the offset in the offsets file (none for a JSON model)'),
   })
   .describe('an offset that makes a bump or a hollow in its waterline or section: a warning, not an error');
 
@@ -99,8 +103,18 @@ export const check: Computation<Record<string, never>, CheckResult> = {
     hull: hullSummary(h.hull),
     particulars: particulars(h),
     issues: [],
-    warnings: [...checkWarnings(h.notes()), ...proportionWarnings(h.hull, h.units), ...fairnessWarnings(h.hull)],
+    warnings: [...checkWarnings(h.notes()), ...proportionWarnings(h.hull, h.units), ...fairnessWarningsIn(h.hull, h.reading())],
     caution: CAUTION,
+  }),
+  jsonOnly: true,
+  form: () => ({
+    units: {
+      hull: HULL_UNITS,
+      particulars: { lowestKeel: 'm', lowestDeck: 'm' },
+      warnings: [{ x: 'm', z: 'm', value: 'm', suggested: 'm' }],
+    },
+    columns: [],
+    lines: () => [],
   }),
   invalid: (err: HalfbreadthError) => ({
     valid: false,

@@ -7,21 +7,25 @@
  */
 import { z } from 'zod';
 import type { HalfbreadthError } from '../../core/common/errors.js';
+import type { UnitSystem } from '../../core/common/units.js';
 import { HullModelSchema, type HullModel } from '../../core/hull/hullModel.js';
+import type { AnswerForm } from '../../core/report/answerForm.js';
+import type { Converter } from '../../core/report/unitConversion.js';
+import { ANSWER_QUERY, InputUnitsQuery } from '../answerQuery.js';
 import type { Cost } from './cost.js';
 import type { LoadedHull } from '../hullInput.js';
-import { FormatQuery, type Format } from '../requestFields.js';
+import { inUnitSystem, type Format } from '../requestFields.js';
 
 export interface Computation<P, R> {
   /** URL segment. */
   readonly name: string;
   readonly summary: string;
   readonly description: string;
-  /** Parameters as query text (stored hulls, CSV bodies). */
+  /** Parameters as query text (stored hulls, CSV bodies); lengths declared with the SI fields of requestFields.ts. */
   readonly query: z.ZodObject;
   /** The same parameters as fields of a JSON body, beside `offsets`. */
   readonly body: z.ZodObject;
-  /** Schema of the JSON result. */
+  /** Schema of the JSON result (SI, every column). */
   readonly result: z.ZodType;
   /** The parameters in one canonical text, for the ETag. */
   key(params: P): string;
@@ -32,12 +36,19 @@ export interface Computation<P, R> {
    * on the request thread or in a worker thread. Cheap: at most one pass over the stations.
    */
   cost(hull: HullModel, params: P): Cost;
-  run(hull: LoadedHull, params: P): R;
-  /** The CSV form of the result, when there is one. */
-  readonly csv?: (result: R) => string;
+  /** The result, in SI; `conv` writes the lengths in its words (notes, the sheet's lines) in the answer's unit. */
+  run(hull: LoadedHull, params: P, conv: Converter): R;
+  /**
+   * The answer's form (core/report/answerForm.ts): the unit of each number, the table's
+   * columns, where its rows are and what it is of. The shared query fields (format,
+   * units, fields, digits, header, inputUnits) work on it with no code here.
+   */
+  form(params: P): AnswerForm<R>;
+  /** True when the answer is JSON only (findings rather than a table). */
+  readonly jsonOnly?: boolean;
   /** The answer for offsets that break a rule, when that is an answer rather than a failure. */
   readonly invalid?: (err: HalfbreadthError) => R;
-  /** True when `run` asks for the notes on how the offsets file is written (hull.notes()), which a stored hull reads from its upload. */
+  /** True when `run` asks for how the offsets file is written (hull.reading()), which a stored hull reads from its upload. */
   readonly usesNotes?: boolean;
 }
 
@@ -46,19 +57,26 @@ export interface Computation<P, R> {
 export type AnyComputation = Computation<any, any>;
 
 export function formatsOf(c: AnyComputation): Format[] {
-  return c.csv === undefined ? ['json'] : ['json', 'csv'];
+  return c.jsonOnly === true ? ['json'] : ['json', 'csv'];
 }
 
 const OffsetsRequired = z.custom<unknown>((v) => v !== undefined, { error: 'offsets is required: the hull model, lengths in m' });
 
-/** The request schemas of a computation: for validation, and for the OpenAPI document (the same but for `offsets`). */
-export function requestSchemas(c: AnyComputation) {
+/**
+ * The request schemas of a computation, for validation and for the OpenAPI document:
+ * its own parameters (lengths in the unit system asked for) with the shared answer
+ * fields (answerQuery.ts).
+ */
+export function requestSchemas(c: AnyComputation, units: UnitSystem = 'si') {
+  const query = inUnitSystem(c.query, units).extend(ANSWER_QUERY).strict();
   return {
-    /** Query of a stored hull's GET and of a POST with a CSV body. */
-    query: c.query.extend({ format: FormatQuery }).strict(),
+    /** Query of a stored hull's GET. */
+    query,
+    /** Query of a POST with a CSV body: also the unit of a file that gives none. */
+    csvQuery: query.extend({ inputUnits: InputUnitsQuery }).strict(),
     /** Query of a POST with a JSON body: the parameters go in the body. */
-    jsonQuery: z.object({ format: FormatQuery }).strict(),
-    jsonBody: c.body.extend({ offsets: OffsetsRequired }).strict(),
+    jsonQuery: z.object(ANSWER_QUERY).strict(),
+    jsonBody: inUnitSystem(c.body, units).extend({ offsets: OffsetsRequired }).strict(),
     jsonBodyDocument: c.body.extend({ offsets: HullModelSchema }).strict(),
   };
 }

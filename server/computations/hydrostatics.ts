@@ -1,7 +1,7 @@
 /** The upright hydrostatic table (core/upright/hydrostatics.ts) at a list of drafts and a water density. */
 import { z } from 'zod';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
-import { hydrostaticResult, hydrostaticsCsv, type HydrostaticResult } from '../../core/report/formatHydrostatics.js';
+import { HYDROSTATICS_FORM, hydrostaticResult, type HydrostaticResult } from '../../core/report/formatHydrostatics.js';
 import { DensityBody, DensityQuery, DraftsBody, DraftsQuery } from '../requestFields.js';
 import { HydrostaticResultSchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
@@ -26,10 +26,10 @@ export const hydrostatics: Computation<Params, HydrostaticResult> = {
   // The drafts' exact doubles as base64: canonical (0.5 and 0.50 give one key) and far cheaper than writing them as text.
   key: (p) => `drafts=${Buffer.from(Float64Array.from(p.drafts).buffer).toString('base64')}&density=${p.density}`,
   cost: (hull, p) => ({ cells: p.drafts.length * HYDROSTATIC_FIELDS.length, work: prepareWork(hull) + p.drafts.length * hull.stations.length }),
-  run: (h, p) => {
+  run: (h, p, conv) => {
     const rows = hydrostaticTable(h.prepared, p.drafts, p.density);
     requireFormedRows(rows);
-    return hydrostaticResult(h.hull, p.density, rows);
+    return hydrostaticResult(h.hull, p.density, rows, conv);
   },
-  csv: hydrostaticsCsv,
+  form: () => HYDROSTATICS_FORM,
 };

@@ -5,8 +5,8 @@
  * CSV (core/report/formatSheet.ts sheetCsv) holds the longitudinal sheet.
  */
 import { z } from 'zod';
-import { calculationSheet } from '../../core/upright/calculationSheet.js';
-import { SHEET_RESULTS, sheetCsv, sheetResult, type SheetResult } from '../../core/report/formatSheet.js';
+import { calculationSheet, LEVER_UNITS, type LeverUnit } from '../../core/upright/calculationSheet.js';
+import { SHEET_RESULTS, sheetForm, sheetResult, type SheetResult } from '../../core/report/formatSheet.js';
 import { DensityBody, DensityQuery, DraftBody, DraftQuery } from '../requestFields.js';
 import { CautionField, HullSummarySchema } from '../responseSchemas.js';
 import type { Computation } from './computation.js';
@@ -61,8 +61,10 @@ const SheetStationSchema = z.object({
     .enum(['station', 'end', 'between'])
     .describe('a station; the end of the waterline between two stations; or the middle ordinate of a piece, read between two stations'),
   note: z.string().nullable().describe('for an end or middle line, where its values are read from; null for a station'),
-  x: z.number().describe('position of the ordinate, m'),
-  lever: z.number().describe('x - amidships, m'),
+  station: z.number().describe('position in station spaces from the AP, (x - ap) / h: 0, 0.5, 1, ... as the trade numbers stations'),
+  stationText: z.string().describe('the station number as the trade writes it (0, 1/2, 9 1/2, or a decimal)'),
+  x: z.number().describe('position of the ordinate, m, from the offsets\' origin'),
+  lever: z.number().describe('x - amidships, m; with levers=stations, (x - amidships) / h in station spaces'),
   halfBreadth: z.number().describe('half-breadth at the waterline, m'),
   area: z.number().describe('immersed sectional area, both sides, m2'),
   momentZ: z.number().describe('moment of the immersed area about the baseline, m3'),
@@ -117,6 +119,7 @@ export const SheetResultSchema = z
     spacing: z.number().describe('h, the most common station interval, m'),
     commonFactor: z.number().describe('h/3, m'),
     amidships: z.number().describe('x of amidships, (ap + fp) / 2, the origin of the levers, m'),
+    levers: z.enum(LEVER_UNITS).describe('metres: levers x - amidships; stations: levers (x - amidships) / h, the moment sums then multiplied by h (LCB, LCF) and h^2 (IL)'),
     caution: CautionField,
     stations: z.array(SheetStationSchema).describe('the lines of the sheet in x order: immersed stations, waterline ends and middle ordinates'),
     pieces: z.array(SheetPieceSchema).describe('the pieces of the integration along the length, with their rules'),
@@ -129,7 +132,13 @@ export const SheetResultSchema = z
 interface Params {
   draft: number;
   density: number;
+  levers?: LeverUnit | undefined;
 }
+
+const LeversQuery = z
+  .enum(LEVER_UNITS, { error: `levers must be one of ${LEVER_UNITS.join(', ')}` })
+  .optional()
+  .describe('metres (default): levers x - amidships in m; stations: levers (x - amidships) / h in station spaces, as a hand sheet takes them');
 
 export const sheet: Computation<Params, SheetResult> = {
   name: 'sheet',
@@ -139,10 +148,10 @@ export const sheet: Computation<Params, SheetResult> = {
     'stations, the end and the middle of the end piece) its lever from amidships, half-breadth at the waterline, immersed area and ' +
     'its moment, Simpson\'s multiplier and the products; the pieces of the integration and their rules; the sums, the common factor ' +
     'h/3 and the particulars they give; and each station\'s vertical sheet. The CSV holds the longitudinal sheet.',
-  query: z.object({ draft: DraftQuery, density: DensityQuery }),
-  body: z.object({ draft: DraftBody, density: DensityBody }),
+  query: z.object({ draft: DraftQuery, density: DensityQuery, levers: LeversQuery }),
+  body: z.object({ draft: DraftBody, density: DensityBody, levers: LeversQuery }),
   result: SheetResultSchema,
-  key: (p) => `draft=${p.draft}&density=${p.density}`,
+  key: (p) => `draft=${p.draft}&density=${p.density}&levers=${p.levers ?? 'metres'}`,
   // Per station about fifteen numbers, and seven per ordinate of its vertical sheet (its points below the draft, and one more).
   cost: (hull, p) => {
     let ordinates = 0;
@@ -153,10 +162,10 @@ export const sheet: Computation<Params, SheetResult> = {
     const cells = 15 * hull.stations.length + 7 * ordinates;
     return { cells, work: prepareWork(hull) + cells };
   },
-  run: (h, p) => {
-    const s = calculationSheet(h.prepared, p.draft, p.density);
+  run: (h, p, conv) => {
+    const s = calculationSheet(h.prepared, p.draft, p.density, { levers: p.levers ?? 'metres', length: conv.length });
     requireFormed(p.draft, s.results);
     return sheetResult(h.hull, s);
   },
-  csv: sheetCsv,
+  form: (p) => sheetForm(p.levers ?? 'metres'),
 };

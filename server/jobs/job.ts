@@ -17,9 +17,9 @@ import type { KeptAnswer } from '../answerCache.js';
 import { COMPUTATIONS } from '../computations/index.js';
 import { requestSchemas, type AnyComputation } from '../computations/computation.js';
 import { checkAnswerSize } from '../computations/cost.js';
-import { hullFromCsv, hullFromJson, loadHull, notesOfSource, renamed, type LoadedHull, type ReadHull } from '../hullInput.js';
+import { hullFromCsv, hullFromJson, loadHull, renamed, sourceReading, type LoadedHull, type ReadHull } from '../hullInput.js';
 import { jsonText } from '../jsonText.js';
-import { CSV_MEDIA_TYPE, JSON_MEDIA_TYPE } from '../negotiate.js';
+import { CSV_MEDIA_TYPE, JSON_MEDIA_TYPE, TEXT_MEDIA_TYPE } from '../negotiate.js';
 import { parseJsonText } from '../plugins/uploadBody.js';
 import { FIELD_CODES, NameField, type Format } from '../requestFields.js';
 import { ServiceError, type ProblemIssue, type ServiceCode } from '../serviceErrors.js';
@@ -27,6 +27,10 @@ import type { HullForm } from '../store/hullStore.js';
 import { parseOrFail, requireObject } from '../validate.js';
 import { z } from 'zod';
 import { fail } from '../../core/common/errors.js';
+import type { LengthUnit as FileUnit } from '../../core/common/units.js';
+import { answerCsv, answerJson, answerValue, shapeAnswer } from '../../core/report/answerForm.js';
+import type { OutputOptions } from '../../core/report/outputOptions.js';
+import { converterFor, type Converter } from '../../core/report/unitConversion.js';
 
 /** Where a hull comes from: an offsets file, a JSON body (parameters beside `offsets`), or a stored model's JSON text. */
 export type HullSource =
@@ -41,14 +45,21 @@ export type HullSource =
       readonly sourceText?: string | undefined;
     };
 
+/** The forms of an answer: JSON, CSV, or one value as text (the single-value route). */
+export type AnswerFormat = Format | 'value';
+
 /** A computation on a hull: its answer's text. `params` are the validated query's, for csv and stored sources. */
 export interface ComputeJob {
   readonly kind: 'compute';
   readonly computation: string;
   readonly source: HullSource;
   readonly params?: unknown;
-  readonly format: Format;
+  readonly format: AnswerFormat;
   readonly filename: string;
+  /** Units, fields, digits and header of the answer (core/report/outputOptions.ts). */
+  readonly output: OutputOptions;
+  /** The unit of an offsets file in the body that gives none. */
+  readonly inputUnits?: FileUnit | undefined;
 }
 
 /** Reading an upload for the store: the model as JSON text and what the record says of it. */
@@ -57,6 +68,8 @@ export interface ReadJob {
   readonly source: Extract<HullSource, { kind: 'csv' | 'json' }>;
   /** A name given in the query. */
   readonly name?: string | undefined;
+  /** The unit of an offsets file that gives none. */
+  readonly inputUnits?: FileUnit | undefined;
 }
 
 /** Writing a stored model back as an offsets file. */
@@ -105,42 +118,46 @@ export function computationNamed(name: string): AnyComputation {
   return c;
 }
 
-/** The hull of a source, and for a JSON body the parameters beside it (validated with the computation's schema). */
-export function readSource(c: AnyComputation, source: HullSource, params: unknown): { read: ReadHull; params: unknown } {
-  if (source.kind === 'csv') return { read: hullFromCsv(source.text), params };
+/** The hull of a source, and for a JSON body the parameters beside it (validated with the computation's schema, lengths in the job's units). */
+export function readSource(c: AnyComputation, job: Pick<ComputeJob, 'source' | 'params' | 'output' | 'inputUnits'>): { read: ReadHull; params: unknown } {
+  const { source, params } = job;
+  if (source.kind === 'csv') return { read: hullFromCsv(source.text, job.inputUnits), params };
   if (source.kind === 'stored') {
     const text = source.sourceText;
-    const notes = text === undefined ? () => [] : notesOfSource('text/csv', () => Buffer.from(text, 'utf8'));
-    return { read: { hull: JSON.parse(source.modelText) as HullModel, form: source.form, units: source.units, notes }, params };
+    const reading = sourceReading('text/csv', () => (text === undefined ? undefined : Buffer.from(text, 'utf8')), source.units);
+    return { read: { hull: JSON.parse(source.modelText) as HullModel, form: source.form, units: source.units, ...reading }, params };
   }
   const shape = `{"offsets": <hull model>${Object.keys(c.body.shape).map((k) => `, "${k}"`).join('')}}`;
-  const body = parseOrFail(requestSchemas(c).jsonBody, requireObject(parseJsonText(source.text), shape), FIELD_CODES) as { offsets: unknown };
+  const body = parseOrFail(requestSchemas(c, job.output.units).jsonBody, requireObject(parseJsonText(source.text), shape), FIELD_CODES) as { offsets: unknown };
   return { read: hullFromJson(body.offsets), params: body };
 }
 
-/** The answer's text in the chosen form. */
-export function renderResult(c: AnyComputation, result: unknown, format: Format, filename: string): KeptAnswer {
-  if (format === 'csv' && c.csv !== undefined) return { mediaType: CSV_MEDIA_TYPE, body: c.csv(result), filename: `${filename}.csv` };
-  return { mediaType: JSON_MEDIA_TYPE, body: jsonText(result) };
+/** The answer's text in the chosen form, through the shared output step (core/report/answerForm.ts). */
+export function renderResult(c: AnyComputation, result: unknown, params: unknown, job: Pick<ComputeJob, 'format' | 'filename' | 'output'>, conv: Converter): KeptAnswer {
+  const a = shapeAnswer(c.form(params), result, job.output, conv);
+  if (job.format === 'value') return { mediaType: TEXT_MEDIA_TYPE, body: answerValue(a) };
+  if (job.format === 'csv' && c.jsonOnly !== true) return { mediaType: CSV_MEDIA_TYPE, body: answerCsv(a), filename: `${job.filename}.csv` };
+  return { mediaType: JSON_MEDIA_TYPE, body: jsonText(answerJson(a)) };
 }
 
 /** Check the answer's size, compute and write it, on a hull already loaded. */
-export function computeAnswer(c: AnyComputation, hull: LoadedHull, params: unknown, format: Format, filename: string): KeptAnswer {
+export function computeAnswer(c: AnyComputation, hull: LoadedHull, params: unknown, job: Pick<ComputeJob, 'format' | 'filename' | 'output'>, conv: Converter): KeptAnswer {
   checkAnswerSize(c.name, c.cost(hull.hull, params));
-  return renderResult(c, c.run(hull, params), format, filename);
+  return renderResult(c, c.run(hull, params, conv), params, job, conv);
 }
 
-function runCompute(job: ComputeJob): KeptAnswer {
+async function runCompute(job: ComputeJob): Promise<KeptAnswer> {
   const c = computationNamed(job.computation);
+  const conv = await converterFor(job.output.units);
   let input: { read: ReadHull; params: unknown };
   try {
-    input = readSource(c, job.source, job.params);
+    input = readSource(c, job);
   } catch (e) {
     // Offsets that break a rule are the answer of a computation that says so (the check).
-    if (e instanceof HalfbreadthError && c.invalid !== undefined && job.source.kind !== 'stored') return renderResult(c, c.invalid(e), job.format, job.filename);
+    if (e instanceof HalfbreadthError && c.invalid !== undefined && job.source.kind !== 'stored') return renderResult(c, c.invalid(e), job.params, job, conv);
     throw e;
   }
-  return computeAnswer(c, loadHull(input.read), input.params, job.format, job.filename);
+  return computeAnswer(c, loadHull(input.read), input.params, job, conv);
 }
 
 const UploadJsonBody = z
@@ -151,8 +168,8 @@ const UploadJsonBody = z
   .strict();
 
 /** The hull of an upload for the store, with a name given beside it (in the query, or in a JSON body) in place of its own. */
-export function readUpload(source: ReadJob['source'], queryName: string | undefined): ReadHull {
-  if (source.kind === 'csv') return renamed(hullFromCsv(source.text), queryName);
+export function readUpload(source: ReadJob['source'], queryName: string | undefined, inputUnits?: FileUnit): ReadHull {
+  if (source.kind === 'csv') return renamed(hullFromCsv(source.text, inputUnits), queryName);
   const body = parseOrFail(UploadJsonBody, requireObject(parseJsonText(source.text), '{"offsets": <hull model>, "name"?}'), FIELD_CODES);
   if (body.name !== undefined && queryName !== undefined) fail('HYD_BAD_ARGUMENT', ['name'], 'name: given both in the query and in the body; give it once');
   return renamed(hullFromJson(body.offsets), queryName ?? body.name);
@@ -161,14 +178,14 @@ export function readUpload(source: ReadJob['source'], queryName: string | undefi
 export { UploadJsonBody };
 
 function runRead(job: ReadJob): ReadOutcome {
-  const r = readUpload(job.source, job.name);
+  const r = readUpload(job.source, job.name, job.inputUnits);
   return { modelText: JSON.stringify(r.hull), summary: hullSummary(r.hull), form: r.form, units: r.units };
 }
 
 /** Run a job; failures of the input come back as data. */
-export function runJob(job: Job): JobOutcome {
+export async function runJob(job: Job): Promise<JobOutcome> {
   try {
-    if (job.kind === 'compute') return { ok: true, value: runCompute(job) };
+    if (job.kind === 'compute') return { ok: true, value: await runCompute(job) };
     if (job.kind === 'read') return { ok: true, value: runRead(job) };
     return { ok: true, value: writeOffsetsCsv(JSON.parse(job.modelText) as HullModel, { units: job.units }) };
   } catch (e) {

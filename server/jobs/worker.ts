@@ -4,6 +4,6 @@
  */
 import { runJob, type Job, type JobOutcome } from './job.js';
 
-export default function work(job: Job): JobOutcome {
+export default function work(job: Job): Promise<JobOutcome> {
   return runJob(job);
 }

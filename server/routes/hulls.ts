@@ -15,15 +15,45 @@ import { readUpload, UploadJsonBody, type ReadOutcome } from '../jobs/job.js';
 import { chooseFormat, CSV_MEDIA_TYPE, JSON_MEDIA_TYPE } from '../negotiate.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { FIELD_CODES, FormatQuery, NameField } from '../requestFields.js';
+import { FieldsQuery, HeaderQuery, InputUnitsQuery, outputOf } from '../answerQuery.js';
+import { answerCsv, answerJson, shapeAnswer, type AnswerForm } from '../../core/report/answerForm.js';
+import { SI_CONVERTER } from '../../core/report/unitConversion.js';
+import { fail } from '../../core/common/errors.js';
+import { SERVICE_LIMITS } from '../serviceLimits.js';
 import { HullListSchema, HullRecordSchema, HullWithOffsetsSchema } from '../responseSchemas.js';
 import { HullModelSchema, type HullModel } from '../../core/hull/hullModel.js';
 import { serviceFail } from '../serviceErrors.js';
 import type { HullForm, HullMeta, NewHull } from '../store/hullStore.js';
 import { parseOrFail } from '../validate.js';
 import type { RouteSpec } from './routeSpec.js';
-import { requireHullMeta } from './storedHull.js';
+import { hullIdOf, requireHullMeta } from './storedHull.js';
 
-const UploadQuery = z.object({ name: NameField }).strict();
+const UploadQuery = z.object({ name: NameField, inputUnits: InputUnitsQuery }).strict();
+
+/**
+ * The form of an id a user chooses for a new hull (PUT /v1/hulls/{id}): a slug of 1 to 64
+ * lowercase letters, digits and hyphens, beginning and ending with a letter or digit
+ * (`my-launch`, `hull-2`). Ids the service makes itself (POST) are 16 URL-safe characters.
+ */
+export const SLUG = new RegExp(`^[a-z0-9](?:[a-z0-9-]{0,${SERVICE_LIMITS.maxIdLength - 2}}[a-z0-9])?$`);
+export const SLUG_TEXT = `1 to ${SERVICE_LIMITS.maxIdLength} lowercase letters, digits and hyphens, beginning and ending with a letter or digit (e.g. my-launch-2)`;
+
+/** The stored hulls as a table (answerForm.ts): `GET /v1/hulls`, in JSON or CSV, with fields and a plain header. */
+const LIST_FORM: AnswerForm<{ hulls: readonly Record<string, unknown>[]; caution: string }> = {
+  units: {},
+  columns: [
+    { key: 'id', unit: '', label: 'id' },
+    { key: 'name', unit: '', label: 'name' },
+    { key: 'created', unit: '', label: 'created' },
+    { key: 'updated', unit: '', label: 'updated' },
+    { key: 'stations', unit: '-', label: 'stations' },
+    { key: 'hash', unit: '', label: 'sha256' },
+  ],
+  rowsKey: 'hulls',
+  lines: () => ['the stored hulls oldest first'],
+};
+
+const ListQuery = z.object({ format: FormatQuery, fields: FieldsQuery, header: HeaderQuery }).strict();
 const UploadJsonBodyDocument = UploadJsonBody.extend({ offsets: HullModelSchema });
 
 const ReadQuery = z
@@ -50,10 +80,10 @@ async function uploadedHull(req: FastifyRequest, ctx: ServiceContext): Promise<U
   const source = upload.mediaType === 'text/csv' ? ({ kind: 'csv', text: upload.text } as const) : ({ kind: 'json', text: upload.text } as const);
   const kept = { mediaType: upload.mediaType, source: upload.bytes };
   if (upload.bytes.length <= ctx.limits.inlineBytes) {
-    const r = readUpload(source, q.name);
+    const r = readUpload(source, q.name, q.inputUnits);
     return { hull: { model: r.hull, form: r.form, units: r.units, ...kept }, summary: hullSummary(r.hull) };
   }
-  const r = (await ctx.pool.run({ kind: 'read', source, name: q.name })) as ReadOutcome;
+  const r = (await ctx.pool.run({ kind: 'read', source, name: q.name, inputUnits: q.inputUnits })) as ReadOutcome;
   return {
     hull: { model: { text: r.modelText, name: r.summary.name, stationCount: r.summary.stations }, form: r.form as HullForm, units: r.units, ...kept },
     summary: r.summary,
@@ -99,6 +129,7 @@ function record(meta: HullMeta, s: HullSummary): z.infer<typeof HullRecordSchema
       self,
       source: `${self}/source`,
       hydrostatics: `${self}/hydrostatics?drafts=`,
+      value: `${self}/hydrostatics/{field}?draft=`,
       sheet: `${self}/sheet?draft=`,
       bonjean: `${self}/bonjean`,
       areas: `${self}/areas?draft=`,
@@ -116,12 +147,36 @@ async function create(req: FastifyRequest, reply: FastifyReply, ctx: ServiceCont
   return sendJson(reply.code(201).header('location', `/v1/hulls/${meta.id}`).header('etag', hullTag(meta, 'm', 'json')), record(meta, h.summary));
 }
 
-async function replace(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
-  const before = requireHullMeta(ctx.store, req);
-  requireIfMatch(req, before);
+/** `If-None-Match: *` on a PUT: write only if no hull is stored under the id (RFC 9110, 13.1.2). */
+const createOnly = (req: FastifyRequest): boolean => req.headers['if-none-match']?.trim() === '*';
+
+/**
+ * PUT: new offsets under an id. A hull stored there is replaced (its id and creation time
+ * stay; If-Match guards against lost updates); where none is, one is created under the id
+ * (201), which must then be a slug (SLUG). If-Match with no hull there, or If-None-Match: *
+ * with one, is 412.
+ */
+async function put(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
+  const id = hullIdOf(req);
+  const before = ctx.store.meta(id);
+  if (before === undefined) {
+    if (!SLUG.test(id)) fail('HYD_BAD_ARGUMENT', ['id'], `no hull is stored under id "${id}", and a new hull's id must be a slug: ${SLUG_TEXT}`);
+    if (req.headers['if-match'] !== undefined) {
+      serviceFail('HYD_PRECONDITION_FAILED', ['headers', 'if-match'], `no hull is stored under id "${id}", so If-Match cannot hold; leave it out to create the hull`);
+    }
+  } else {
+    if (createOnly(req)) serviceFail('HYD_PRECONDITION_FAILED', ['headers', 'if-none-match'], `a hull is stored under id "${id}" already, and If-None-Match: * asks to create one only where none is`);
+    requireIfMatch(req, before);
+  }
   const h = await uploadedHull(req, ctx);
   // Read again after the upload was read (perhaps in a worker): another write may have come between.
-  const now = requireHullMeta(ctx.store, req);
+  const now = ctx.store.meta(id);
+  if (now === undefined) {
+    if (before !== undefined) serviceFail('HYD_HULL_NOT_FOUND', ['id'], `no hull is stored under id "${id}": it was deleted while this request was read`);
+    const meta = ctx.store.create(h.hull, id);
+    return sendJson(reply.code(201).header('location', `/v1/hulls/${meta.id}`).header('etag', hullTag(meta, 'm', 'json')), record(meta, h.summary));
+  }
+  if (before === undefined && createOnly(req)) serviceFail('HYD_PRECONDITION_FAILED', ['headers', 'if-none-match'], `a hull was stored under id "${id}" while this request was read`);
   requireIfMatch(req, now);
   const meta = ctx.store.replace(now.id, h.hull);
   if (meta === undefined) serviceFail('HYD_HULL_NOT_FOUND', ['id'], `no hull is stored under id "${now.id}"`);
@@ -138,10 +193,14 @@ function remove(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): 
   return reply.code(204).send();
 }
 
-function list(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): FastifyReply {
-  parseOrFail(EmptyQuery, req.query);
+async function list(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
+  const q = parseOrFail(ListQuery, req.query, FIELD_CODES);
+  const format = chooseFormat(req, q.format);
   const hulls = ctx.store.list().map((m) => ({ id: m.id, name: m.name, created: m.created, updated: m.updated, hash: m.hash, stations: m.stations }));
-  return sendJson(reply, { hulls, caution: CAUTION });
+  const output = outputOf({ fields: q.fields, header: q.header });
+  const a = shapeAnswer(LIST_FORM, { hulls, caution: CAUTION }, output, SI_CONVERTER);
+  if (format === 'csv') return reply.type(CSV_MEDIA_TYPE).header('content-disposition', 'inline; filename="hulls.csv"').send(answerCsv(a));
+  return sendJson(reply, answerJson(a));
 }
 
 async function read(req: FastifyRequest, reply: FastifyReply, ctx: ServiceContext): Promise<FastifyReply> {
@@ -203,10 +262,10 @@ export const HULL_ROUTES: readonly RouteSpec[] = [
     operationId: 'listHulls',
     tag: 'hulls',
     summary: 'List the stored hulls',
-    description: 'Every stored hull, oldest first.',
-    query: EmptyQuery,
-    responses: { 200: { description: 'the stored hulls', json: HullListSchema } },
-    problems: [400],
+    description: 'Every stored hull, oldest first, as JSON or as CSV (format=csv or Accept: text/csv): one row per hull, id, name, created, updated, stations, hash; fields= and header=plain as for the computations.',
+    query: ListQuery,
+    responses: { 200: { description: 'the stored hulls', json: HullListSchema, csv: 'one row per hull: id, name, created, updated, stations, hash_sha256; the caution on the first line (last with header=plain)' } },
+    problems: [400, 406],
     handler: list,
   },
   {
@@ -244,15 +303,20 @@ export const HULL_ROUTES: readonly RouteSpec[] = [
     url: '/v1/hulls/:id',
     operationId: 'replaceHull',
     tag: 'hulls',
-    summary: 'Replace a stored hull',
+    summary: 'Store a hull under a chosen id, or replace a stored hull',
     description:
-      'New offsets for a stored hull; its id and creation time stay. Send If-Match with the ETag of a GET of the hull: when the hull has ' +
-      'changed since, the answer is 412 and nothing is written (no lost update). Without If-Match the last writer wins.',
+      `New offsets under an id. Where no hull is stored under it, one is created there (201, Location): the id must then be a slug, ${SLUG_TEXT}. ` +
+      'Where one is, it is replaced; its id and creation time stay. Send If-Match with the ETag of a GET of the hull: when the hull has ' +
+      'changed since, the answer is 412 and nothing is written (no lost update); without If-Match the last writer wins. If-None-Match: * creates ' +
+      'only (412 when a hull is there); If-Match where none is gets 412.',
     query: UploadQuery,
     body: UPLOAD_BODY,
-    responses: { 200: { description: 'replaced', json: HullRecordSchema, headers: ['ETag'] } },
+    responses: {
+      200: { description: 'replaced', json: HullRecordSchema, headers: ['ETag'] },
+      201: { description: 'created under the id', json: HullRecordSchema, headers: ['Location', 'ETag'] },
+    },
     problems: [400, 404, 412, 413, 415, 422, 503],
-    handler: replace,
+    handler: put,
   },
   {
     method: 'DELETE',

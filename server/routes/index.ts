@@ -6,5 +6,6 @@ import { PLOT_ROUTES } from './plots.js';
 import { REPORT_ROUTES } from './report.js';
 import type { RouteSpec } from './routeSpec.js';
 import { SERVICE_ROUTES } from './service.js';
+import { VALUE_ROUTES } from './value.js';
 
-export const ALL_ROUTES: readonly RouteSpec[] = [...COMPUTE_ROUTES, ...PLOT_ROUTES, ...REPORT_ROUTES, ...HULL_ROUTES, ...SERVICE_ROUTES, ...PAGE_ROUTES];
+export const ALL_ROUTES: readonly RouteSpec[] = [...COMPUTE_ROUTES, ...VALUE_ROUTES, ...PLOT_ROUTES, ...REPORT_ROUTES, ...HULL_ROUTES, ...SERVICE_ROUTES, ...PAGE_ROUTES];

@@ -18,7 +18,8 @@ export interface ResponseDoc {
   readonly csv?: string;
   /** Some other media type, described in words. */
   readonly other?: { readonly mediaType: string; readonly description: string };
-  readonly headers?: readonly string[];
+  /** Response headers: a name, or a name with what it carries. */
+  readonly headers?: readonly (string | { readonly name: string; readonly description: string })[];
 }
 
 export interface RouteSpec {

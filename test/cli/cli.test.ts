@@ -21,6 +21,7 @@ import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { COMMANDS } from '../../cli/commands/index.js';
 import type { CliIo } from '../../cli/io.js';
 import { main } from '../../cli/main.js';
+import { written } from '../helpers/written.js';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const demo = (name: string): string => fileURLToPath(new URL(`../../offsets-demo/${name}`, import.meta.url));
@@ -119,7 +120,7 @@ describe('hydrostatics as CSV', () => {
       FIELDS.forEach((f, k) => {
         const want = expected[i]![f];
         const cell = row[HEADERS[k]!]!;
-        if (Number.isFinite(want)) expect(Number(cell), `${f} at row ${i}`).toBe(want);
+        if (Number.isFinite(want)) expect(Number(cell), `${f} at row ${i}`).toBe(written(want));
         else expect(cell).toBe('');
       });
     });
@@ -137,7 +138,9 @@ describe('hydrostatics as a table and as JSON', () => {
   test('on a terminal the default is the text table, with a units line and the caution', async () => {
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', DRAFTS], { tty: true });
     expect(r.code).toBe(0);
-    const lines = r.out.trimEnd().split('\n');
+    const all = r.out.trimEnd().split('\n');
+    // The lines above the table say what it is of: the hull, the density, the datum of x.
+    const lines = all.slice(all.findIndex((l) => l.trim().startsWith('Draft')) - 1);
     expect(lines[1]!.trim().split(/\s+/).slice(0, 3)).toEqual(['Draft', 'Volume', 'Displ.']);
     expect(lines[2]!.trim().split(/\s+/).slice(0, 3)).toEqual(['m', 'm3', 't']);
     expect(lines.slice(3, 3 + DRAFT_VALUES.length).map((l) => Number(l.trim().split(/\s+/)[0]))).toEqual(DRAFT_VALUES);
@@ -147,7 +150,9 @@ describe('hydrostatics as a table and as JSON', () => {
   test('the table shows the core figures rounded: volume to the millimetre cube', async () => {
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', DRAFTS, '--format', 'table']);
     const expected = coreRows(WORKBOAT, DRAFTS);
-    const body = r.out.split('\n').slice(3, 3 + expected.length);
+    const all = r.out.split('\n');
+    const head = all.findIndex((l) => l.trim().startsWith('Draft'));
+    const body = all.slice(head + 2, head + 2 + expected.length);
     body.forEach((l, i) => expect(Number(l.trim().split(/\s+/)[1])).toBeCloseTo(expected[i]!.volume, 3));
   });
 
@@ -167,14 +172,15 @@ describe('hydrostatics as a table and as JSON', () => {
       expect(Object.keys(row)).toEqual([...FIELDS]);
       for (const f of FIELDS) {
         const want = expected[i]![f];
-        expect(row[f]).toBe(Number.isFinite(want) ? want : null);
+        expect(row[f]).toBe(Number.isFinite(want) ? written(want) : null);
       }
     });
   });
 
   test('--format table wins over a pipe', async () => {
     const r = await run(['hydrostatics', WORKBOAT, '--drafts', '1', '--format', 'table']);
-    expect(r.out.split('\n')[2]!.trim().startsWith('m')).toBe(true);
+    const all = r.out.split('\n');
+    expect(all[all.findIndex((l) => l.trim().startsWith('Draft')) + 1]!.trim().startsWith('m')).toBe(true);
   });
 
   test('the points form (survey launch) runs the same way', async () => {
@@ -183,8 +189,8 @@ describe('hydrostatics as a table and as JSON', () => {
     expect(r.code).toBe(0);
     const rows = (JSON.parse(r.out) as { rows: Record<string, number | null>[] }).rows;
     const expected = coreRows(LAUNCH, drafts);
-    expect(rows.map((x) => x['volume'])).toEqual(expected.map((x) => x.volume));
-    expect(rows.map((x) => x['kmt'])).toEqual(expected.map((x) => x.kmt));
+    expect(rows.map((x) => x['volume'])).toEqual(expected.map((x) => written(x.volume)));
+    expect(rows.map((x) => x['kmt'])).toEqual(expected.map((x) => written(x.kmt)));
   });
 });
 
@@ -492,7 +498,7 @@ describe('the installed command, end to end', () => {
     expect(r.status, r.stderr).toBe(0);
     expect(r.stdout.startsWith(`# ${CAUTION}\r\n`)).toBe(true);
     const rows = parseCsv(r.stdout).data;
-    expect(rows.map((row) => Number(row['volume_m3']))).toEqual(coreRows(WORKBOAT, DRAFTS).map((x) => x.volume));
+    expect(rows.map((row) => Number(row['volume_m3']))).toEqual(coreRows(WORKBOAT, DRAFTS).map((x) => written(x.volume)));
   });
 
   test('standard input with -, as JSON', () => {

@@ -9,6 +9,7 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import Papa from 'papaparse';
+import { written } from '../helpers/written.js';
 import { describe, expect, test } from 'vitest';
 import { CAUTION } from '../../core/common/caution.js';
 import { calculationSheet } from '../../core/upright/calculationSheet.js';
@@ -49,8 +50,8 @@ describe('sheet', () => {
     const j = JSON.parse(r.out);
     const core = calculationSheet(prepared(WORKBOAT), 1.3);
     expect(j.caution).toBe(CAUTION);
-    expect(j.spacing).toBe(core.spacing);
-    expect(j.results.volume).toBe(core.results.volume);
+    expect(j.spacing).toBe(written(core.spacing));
+    expect(j.results.volume).toBe(written(core.results.volume));
     expect(j.stations[4]).toMatchObject({ x: 4.2, multiplierText: '2' });
     expect(j.stations[4].vertical.ordinates.length).toBeGreaterThan(3);
   });
@@ -95,7 +96,7 @@ describe('bonjean and areas', () => {
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
     expect(j.caution).toBe(CAUTION);
-    expect(j.lcb).toBe(hydrostaticsAt(prepared(LAUNCH), 0.45).lcb);
+    expect(j.lcb).toBe(written(hydrostaticsAt(prepared(LAUNCH), 0.45).lcb));
     const table = await run(['areas', LAUNCH, '--draft', '0.45', '--format', 'table']);
     expect(table.out).toContain('<-- LCB');
   });
@@ -103,7 +104,8 @@ describe('bonjean and areas', () => {
 
 describe('hydrostatics options', () => {
   test('--units imperial takes drafts in feet and gives feet, long tons, TPI and MTI', async () => {
-    const r = await run(['hydrostatics', WORKBOAT, '--drafts', '4.5', '--units', 'imperial', '--format', 'csv']);
+    // --digits 17: every digit of the conversion, so the factors can be checked to rounding.
+    const r = await run(['hydrostatics', WORKBOAT, '--drafts', '4.5', '--units', 'imperial', '--format', 'csv', '--digits', '17']);
     expect(r.code).toBe(0);
     expect(r.out.split('\r\n')[0]).toBe(`# ${CAUTION}`);
     const [row] = csvRows(r.out);
@@ -152,8 +154,11 @@ describe('check warns of unfair offsets', () => {
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
     expect(j.warnings).toHaveLength(1);
-    expect(j.warnings[0]).toMatchObject({ x: 7, z: 1.25, value: was + move });
+    expect(j.warnings[0]).toMatchObject({ x: 7, z: 1.25, value: written(was + move) });
     expect(Math.abs(j.warnings[0].suggested - was)).toBeLessThan(0.25 * move);
-    expect(r.err).toContain('bumped.csv: warning: station x = 7 m, z = 1.25 m');
+    // Said as the file says it: its line and column, the station and waterline as written.
+    const line = original.split(/\r\n|\n|\r/).findIndex((l) => l.startsWith('7,')) + 1;
+    expect(j.warnings[0]).toMatchObject({ line, column: column + 1 });
+    expect(r.err).toContain(`bumped.csv: warning: line ${line}, column ${column + 1} (station x = 7 m, WL 1.25 m): half-breadth ${Number((was + move).toPrecision(6))} m is not fair`);
   });
 });

@@ -56,7 +56,16 @@ describe('reading feet-inches-eighths', () => {
     expect(scanFeetInches('3-4-8')).toBe("'3-4-8': eighths 8 must be 0 to 7");
   });
 
-  test.each(['', '3-4', '3.5', 'a-b-c', '3-4-5++', '--3-4-5', '3-4-5-', '3--5', '3-123-0', '3-4-55', '+3-4-5', '-0', '3 - 4 - 5'])(
+  test("a trailing minus takes a sixteenth away, as the loftsman's 3-4-5- is 3 ft 4 9/16 in", () => {
+    // 3 ft 4 9/16 in = 3 + 4.5625 / 12 ft (arithmetic; the notation is common practice, no source).
+    // In sixteenths of an inch (192 to the foot): 3 x 192 + 4 x 16 + 5 x 2 - 1 = 649.
+    expect(scanFeetInches('3-4-5-')).toBe(649 / 192);
+    expect(scanFeetInches('-3-4-5-')).toBe(-649 / 192);
+    // A sixteenth less than 2 ft 0 in is 1 ft 11 15/16 in: 383 sixteenths.
+    expect(scanFeetInches('2-0-0-')).toBe(383 / 192);
+  });
+
+  test.each(['', '3-4', '3.5', 'a-b-c', '3-4-5++', '--3-4-5', '3-4-5--', '3-4-5+-', '3--5', '3-123-0', '3-4-55', '+3-4-5', '-0', '3 - 4 - 5'])(
     "'%s' is not feet-inches-eighths and the reason says how to write it",
     (text) => {
       const r = scanFeetInches(text);

@@ -160,7 +160,8 @@ describe('comments and metadata', () => {
 
   test('CRLF line ends give the same lines and hull as LF', () => {
     const lf = file(...SOUND_GRID);
-    expect(readOffsetsCsv(lf.replace(/\n/g, '\r\n'))).toEqual(readOffsetsCsv(lf));
+    const data = ({ place: _place, ...r }: ReturnType<typeof readOffsetsCsv>): object => r;
+    expect(data(readOffsetsCsv(lf.replace(/\n/g, '\r\n')))).toEqual(data(readOffsetsCsv(lf)));
     const bad = file('x,0,1', '0,1,1', '1,-1,1', '2,1,1');
     expect(issuesOf(bad.replace(/\n/g, '\r\n'))).toEqual(issuesOf(bad));
   });
@@ -386,7 +387,7 @@ describe('each rule has its code and names the place', () => {
   test('a row longer than the header is reported at its first extra column', () => {
     const i = oneIssue(file('x,0,1', '0,1,1', '1,1,1,1', '2,1,1'), 'HYD_ROW_LENGTH');
     expect(i.path).toEqual(['offsets', 3, 4]);
-    expect(i.message).toBe('line 3, column 4: the row has 4 cells but the header has 3');
+    expect(i.message).toBe('line 3, column 4: the row has 4 cells but the header has 3; cells beyond the header must be blank');
   });
 
   test('more waterlines than the limit are too large', () => {

@@ -149,9 +149,15 @@ describe('hydrostatic JSON', () => {
   });
 });
 
+/** The lines of a text table from its column heads on (the lines above say what it is of). */
+const fromHeads = (text: string): string[] => {
+  const lines = text.split('\n');
+  return lines.slice(lines.findIndex((l) => l.trim().startsWith('Draft')) - 1);
+};
+
 describe('hydrostatic text table', () => {
   test('a units line sits under the column heads', () => {
-    const lines = hydrostaticsText(barge().result).split('\n');
+    const lines = fromHeads(hydrostaticsText(barge().result));
     const heads = lines[1]!.trim().split(/\s+/);
     const units = lines[2]!.trim().split(/\s+/);
     expect(heads[0]).toBe('Draft');
@@ -161,7 +167,7 @@ describe('hydrostatic text table', () => {
 
   test('one line per draft, the draft first, and the caution at the end', () => {
     const text = hydrostaticsText(barge().result);
-    const lines = text.trimEnd().split('\n');
+    const lines = fromHeads(text.trimEnd());
     expect(lines[3]!.trim().split(/\s+/)[0]).toBe('0.500');
     expect(lines[4]!.trim().split(/\s+/)[0]).toBe('1.000');
     expect(lines[lines.length - 1]).toBe(CAUTION);
@@ -171,6 +177,6 @@ describe('hydrostatic text table', () => {
     const { result } = barge();
     result.rows[0]!.cp = Number.NaN;
     expect(hydrostaticsText(result)).not.toContain('NaN');
-    expect(hydrostaticsText(result).split('\n')[3]).toMatch(/\s-\s/);
+    expect(fromHeads(hydrostaticsText(result))[3]).toMatch(/\s-\s/);
   });
 });

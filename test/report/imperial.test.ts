@@ -1,5 +1,6 @@
 /**
- * Imperial output (core/report/imperial.ts, core/report/hydrostaticsReport.ts).
+ * Imperial output (core/report/imperial.ts, through the shared output step of
+ * core/report/answerForm.ts and the hydrostatic table's form).
  *
  * Sources (outside the project):
  * - 1 ft = 0.3048 m and 1 lb = 0.45359237 kg exactly: the international yard and pound
@@ -17,8 +18,13 @@ import { CAUTION } from '../../core/common/caution.js';
 import { errorEstimates } from '../../core/upright/errorEstimate.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { hydrostaticsAt, hydrostaticTable } from '../../core/upright/hydrostatics.js';
-import { hydrostaticsReport, reportCsv, reportText } from '../../core/report/hydrostaticsReport.js';
-import { cubicFeetPerLongTon, IMPERIAL_FACTORS, imperialRow } from '../../core/report/imperial.js';
+import { writeAnswer } from '../../core/report/answerForm.js';
+import { ESTIMATED_FORM, estimatedResult, HYDROSTATICS_FORM, hydrostaticResult } from '../../core/report/formatHydrostatics.js';
+import { cubicFeetPerLongTon, IMPERIAL_CONVERTER, IMPERIAL_FACTORS, imperialRow } from '../../core/report/imperial.js';
+import { DEFAULT_OUTPUT } from '../../core/report/outputOptions.js';
+import { SI_CONVERTER } from '../../core/report/unitConversion.js';
+import type { ErrorEstimates } from '../../core/upright/errorEstimate.js';
+import type { HydrostaticRow } from '../../core/upright/hydrostaticFields.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { gridHull, linspace } from '../fixtures/hulls.js';
@@ -125,6 +131,26 @@ describe('imperial particulars', () => {
   });
 });
 
+type Units = 'si' | 'imperial';
+interface Report {
+  caution: string;
+  hull: { lbp: number };
+  fields: { key: string; unit: string }[];
+  rows: Record<string, number | Record<string, number>>[];
+  errorNotes?: string[];
+}
+
+/** The table in a form and unit system, as the command line and the service write it (digits 17: every digit of the conversion). */
+function written(format: 'json' | 'csv' | 'table', hull: HullModel, rows: HydrostaticRow[], units: Units, est?: ErrorEstimates): string {
+  const conv = units === 'si' ? SI_CONVERTER : IMPERIAL_CONVERTER;
+  const options = { ...DEFAULT_OUTPUT, units, digits: 17 };
+  return est === undefined
+    ? writeAnswer(HYDROSTATICS_FORM, hydrostaticResult(hull, 1.025, rows, conv), format, options, conv)
+    : writeAnswer(ESTIMATED_FORM, estimatedResult(hull, 1.025, rows, est, conv), format, options, conv);
+}
+const hydrostaticsReport = (hull: HullModel, _d: number, rows: HydrostaticRow[], o: { units: Units; errorEstimate?: ErrorEstimates }): Report =>
+  JSON.parse(written('json', hull, rows, o.units, o.errorEstimate)) as Report;
+
 describe('the report in imperial units', () => {
   const hull = readOffsetsCsv(table('ft-in-8', ftIn8)).hull;
   const p = prepareHull(hull);
@@ -142,7 +168,7 @@ describe('the report in imperial units', () => {
   });
 
   test('CSV headers carry the imperial units after the caution line', () => {
-    const csv = reportCsv(hydrostaticsReport(hull, 1.025, rows, { units: 'imperial' }));
+    const csv = written('csv', hull, rows, 'imperial');
     expect(csv.split('\r\n')[0]).toBe(`# ${CAUTION}`);
     const data = Papa.parse<string[]>(csv.split('\r\n').filter((l) => !l.startsWith('#')).join('\n'), { skipEmptyLines: true }).data;
     expect(data[0]).toEqual(expect.arrayContaining(['draft_ft', 'volume_ft3', 'displacement_LT', 'iT_ft4', 'tpi_LT_per_in', 'mti_LTft_per_in', 'cb']));
@@ -167,11 +193,11 @@ describe('the report in imperial units', () => {
     expect(siE['volume']).toBe(est.estimates[0]!.volume);
     expect(impE['volume']).toBeRelClose(siE['volume']! / FOOT ** 3, 1e-14);
     expect(impE['lcb']).toBeRelClose(siE['lcb']! / FOOT, 1e-14);
-    const text = reportText(imp);
+    const text = written('table', smooth, smoothRows, 'imperial', est);
     expect(text).toContain('err Volume');
     expect(text).toContain('TPI');
     expect(text.trimEnd().endsWith(CAUTION)).toBe(true);
-    const csv = reportCsv(si);
+    const csv = written('csv', smooth, smoothRows, 'si', est);
     expect(csv).toContain('volumeError_m3');
     expect(csv).toContain('# error estimates: exact minus computed');
   });
@@ -181,8 +207,8 @@ describe('the report in imperial units', () => {
     // cannot confirm the h^4 law for its volume at the lightest draft.
     const est = errorEstimates(p, drafts, 1.025);
     const si = hydrostaticsReport(hull, 1.025, rows, { units: 'si', errorEstimate: est });
-    expect((si.rows[0]!['errorEstimate'] as Record<string, number>)['volume']).toBeNaN();
+    expect((si.rows[0]!['errorEstimate'] as Record<string, number | null>)['volume']).toBeNull();
     expect(si.errorNotes![0]).toMatch(/^draft 0\.4572 m: volume: halving twice gives a ratio of .* not about 16/);
-    expect(reportCsv(si)).toContain('# error estimate not given at draft 0.4572 m: volume: halving twice');
+    expect(written('csv', hull, rows, 'si', est)).toContain('# error estimate not given at draft 0.4572 m: volume: halving twice');
   });
 });

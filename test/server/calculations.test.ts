@@ -25,6 +25,7 @@ import { readFileSync } from 'node:fs';
 import type { FastifyInstance } from 'fastify';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { writtenAll } from '../helpers/written.js';
 import { bonjean } from '../../core/upright/bonjean.js';
 import { calculationSheet } from '../../core/upright/calculationSheet.js';
 import { CAUTION } from '../../core/common/caution.js';
@@ -39,15 +40,17 @@ import { boxBarge } from '../fixtures/hulls.js';
 import { boxCsv, csvHeaders, expectProblem, jsonHeaders } from '../fixtures/serverHelpers.js';
 import { expectFieldsRelClose } from '../helpers/relClose.js';
 
-// Sums of a few dozen Simpson products of exactly representable offsets: rounding only.
-const ROUNDING = 1e-12;
+// Sums of a few dozen Simpson products of exactly representable offsets: rounding only,
+// and answers written to 12 significant digits (at most half a unit in the 12th, 5e-12).
+const ROUNDING = 6e-12;
 
 const WORKBOAT = readFileSync(new URL('../../offsets-demo/workboat.csv', import.meta.url), 'utf8');
 const workboat = readOffsetsCsv(WORKBOAT).hull;
 const workboatPrepared = prepareHull(workboat);
 
 /** What the service's JSON gives for a value of core: the same serialisation (NaN as null). */
-const asJson = (value: unknown): unknown => JSON.parse(JSON.stringify(value));
+/** A core result as the service writes it: JSON, numbers to 12 significant digits (test/helpers/written.ts). */
+const asJson = (value: unknown): unknown => writtenAll(JSON.parse(JSON.stringify(value)));
 
 /** The box of these tests: L = 10 m, B = 4 m, D = 2 m, 11 stations 1 m apart, waterlines 0.5 m apart. */
 const L = 10;
@@ -103,7 +106,7 @@ describe('POST /v1/sheet', () => {
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toBe(JSON_TYPE);
     const body = JSON.parse(res.body);
-    expect(Object.keys(body)).toEqual(['hull', 'draft', 'density', 'spacing', 'commonFactor', 'amidships', 'caution', 'stations', 'pieces', 'ends', 'totals', 'results']);
+    expect(Object.keys(body)).toEqual(['hull', 'draft', 'density', 'spacing', 'commonFactor', 'amidships', 'levers', 'caution', 'stations', 'pieces', 'ends', 'totals', 'results']);
     expect(body.caution).toBe(CAUTION);
     expect(body.draft).toBe(1.3);
     expect(body.density).toBe(1);
@@ -111,7 +114,7 @@ describe('POST /v1/sheet', () => {
     const immersed = workboat.stations.filter((st) => Math.min(...st.points.map((pt) => pt.z)) < 1.3).length;
     expect(body.stations.filter((l: { kind: string }) => l.kind === 'station')).toHaveLength(immersed);
     expect(Object.keys(body.stations[0])).toEqual([
-      'kind', 'note', 'x', 'lever', 'halfBreadth', 'area', 'momentZ', 'multiplier', 'areaSM', 'areaSMLever', 'momentZSM', 'ySM', 'ySMLever', 'ySMLever2', 'y3SM', 'multiplierText', 'vertical',
+      'kind', 'note', 'station', 'x', 'lever', 'halfBreadth', 'area', 'momentZ', 'multiplier', 'areaSM', 'areaSMLever', 'momentZSM', 'ySM', 'ySMLever', 'ySMLever2', 'y3SM', 'stationText', 'multiplierText', 'vertical',
     ]);
     expect(body).toEqual(asJson(sheetResult(workboat, calculationSheet(workboatPrepared, 1.3, 1.0))));
   });
@@ -314,7 +317,7 @@ describe('POST /v1/areas', () => {
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toBe(CSV_TYPE);
     expect(res.body.split('\r\n')[0]).toBe(`# ${CAUTION}`);
-    expect(csvRows(res.body)[0]).toEqual(['x_m', 'area_m2', 'fraction_of_am']);
+    expect(csvRows(res.body)[0]).toEqual(['x_m', 'area_m2', 'fraction']);
     expect(res.body).toBe(areasCsv(areasResult(workboat, sectionalAreaCurve(workboatPrepared, 1.3))));
   });
 

@@ -16,6 +16,7 @@ import { fileURLToPath } from 'node:url';
 import type { FastifyInstance } from 'fastify';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { written, writtenAll } from '../helpers/written.js';
 import { CAUTION } from '../../core/common/caution.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
@@ -34,7 +35,8 @@ const workboat = readFileSync(new URL('../../offsets-demo/workboat.csv', import.
 const launch = readFileSync(new URL('../../offsets-demo/survey-launch.csv', import.meta.url), 'utf8');
 
 /** Core's table as JSON carries it (an undefined coefficient, NaN, is null). */
-const asJson = (rows: unknown): unknown => JSON.parse(JSON.stringify(rows));
+/** Core's rows as the service writes them: JSON, numbers to 12 significant digits (test/helpers/written.ts). */
+const asJson = (rows: unknown): unknown => writtenAll(JSON.parse(JSON.stringify(rows)));
 
 describe('the app on a loopback socket', () => {
   let app: FastifyInstance;
@@ -66,7 +68,7 @@ describe('the app on a loopback socket', () => {
     // The CSV form carries the same numbers.
     const csv = await fetch(`${base}/v1/hulls/${id}/hydrostatics?drafts=${drafts.join(',')}&density=1.0&format=csv`);
     const parsed = Papa.parse<string[]>((await csv.text()).split('\r\n').filter((l) => l !== '' && !l.startsWith('#')).join('\n')).data;
-    expect(parsed.slice(1).map((cells) => Number(cells[1]))).toEqual(core.map((r) => r.volume));
+    expect(parsed.slice(1).map((cells) => Number(cells[1]))).toEqual(core.map((r) => written(r.volume)));
 
     // And a conditional GET over the wire is a 304.
     const again = await fetch(`${base}/v1/hulls/${id}/hydrostatics?drafts=${drafts.join(',')}&density=1.0`, { headers: { 'if-none-match': res.headers.get('etag')! } });

@@ -275,13 +275,14 @@ describe('the sheet in its forms', () => {
   test('CSV opens with the caution, states h and the results, and ends with a row of sums', () => {
     const csv = sheetCsv(r);
     expect(csv.split('\r\n')[0]).toBe(`# ${CAUTION}`);
-    expect(csv).toContain('# h = 1 m (the most common station interval); h/3 = 0.3333333333 m');
-    expect(csv).toContain('# volume = h/3 x sum(A.SM) = 40 m3');
+    expect(csv).toContain('# h = 1 m (the most common station interval); h/3 = 0.333333333333 m');
+    // 10 m x 4 m x 1 m of box: V = L B T = 40 m3, from h/3 x (4 m2 x 30).
+    expect(csv).toContain('# volume = h/3 x sum(A.SM) = 0.333333333333 x 120 = 40 m3');
     const rows = Papa.parse<string[]>(csv.split('\r\n').filter((l) => !l.startsWith('#')).join('\n'), { skipEmptyLines: true }).data;
-    expect(rows[0]!.slice(0, 7)).toEqual(['kind', 'x_m', 'lever_m', 'halfBreadth_m', 'area_m2', 'momentZ_m3', 'multiplier']);
+    expect(rows[0]!.slice(0, 8)).toEqual(['kind', 'station', 'x_m', 'lever_m', 'halfBreadth_m', 'area_m2', 'momentZ_m3', 'multiplier']);
     expect(rows).toHaveLength(1 + 11 + 1);
     expect(rows[12]![0]).toBe('sum');
-    expect(Number(rows[12]![7])).toBeRelClose(120, 1e-13);
+    expect(Number(rows[12]![8])).toBeRelClose(120, 1e-13);
   });
 
   test('the text form shows the multipliers as fractions, the formulae and the caution', () => {
@@ -289,7 +290,8 @@ describe('the sheet in its forms', () => {
     const t = sheetText(sheetResult(half, calculationSheet(prepareHull(half), 0.6)));
     expect(t).toContain('1 1/2');
     expect(t).toContain('volume = h/3 x sum(A.SM) =');
-    expect(t).toContain('Station x = 0.5 m, keel z = 0 m');
+    // The station at x = 0.5 m is half a station space (h = 1 m) from the AP at x = 0.
+    expect(t).toContain('Station 1/2 (x = 0.5 m), keel z = 0 m');
     expect(t.trimEnd().endsWith(CAUTION)).toBe(true);
   });
 });

@@ -58,7 +58,7 @@ describe('the sectional-area curve in its forms', () => {
     expect(csv.split('\r\n')[0]).toBe(`# ${CAUTION}`);
     expect(csv).toMatch(/# lcb \(its centroid\): x = 8 m/);
     const rows = Papa.parse<string[]>(csv.split('\r\n').filter((l) => !l.startsWith('#')).join('\n'), { skipEmptyLines: true }).data;
-    expect(rows[0]).toEqual(['x_m', 'area_m2', 'fraction_of_am']);
+    expect(rows[0]).toEqual(['x_m', 'area_m2', 'fraction']);
     expect(rows).toHaveLength(13);
   });
 
