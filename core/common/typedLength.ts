@@ -9,7 +9,7 @@
  */
 import { readDecimal } from './decimal.js';
 import { scanFeetInches } from './feetInches.js';
-import { lengthFactor, type UnitSystem } from './units.js';
+import { lengthFactor, TONNES_PER_LONG_TON, type UnitSystem } from './units.js';
 
 /** The length unit typed lengths are read in, by unit system. */
 export const TYPED_LENGTH_UNIT: Readonly<Record<UnitSystem, string>> = { si: 'm', imperial: 'ft' };
@@ -43,4 +43,17 @@ export function typedLengthFactor(system: UnitSystem): number {
  */
 export function readTypedLength(text: string, system: UnitSystem): number {
   return readTypedValue(text, system) * typedLengthFactor(system);
+}
+
+/** The unit typed masses (displacements) are read in, by unit system: tonnes, or long tons. */
+export const TYPED_MASS_UNIT: Readonly<Record<UnitSystem, string>> = { si: 't', imperial: 'LT' };
+
+/** Tonnes per unit of typed masses (displacements) in `system`: 1, or 1.0160469088 (long tons). */
+export function typedMassFactor(system: UnitSystem): number {
+  return system === 'si' ? 1 : TONNES_PER_LONG_TON;
+}
+
+/** Tonne-metres per unit of typed moments (a free-surface moment) in `system`: 1, or long ton-feet. */
+export function typedMomentFactor(system: UnitSystem): number {
+  return typedMassFactor(system) * typedLengthFactor(system);
 }

@@ -31,6 +31,13 @@ export function lengthFactor(u: LengthUnit): number {
 }
 
 /**
+ * Tonnes in a long ton (2240 lb of 0.45359237 kg, exact by the same agreement): the unit
+ * of displacements typed with imperial units. A plain number for the reason above; the
+ * tests check it against mathjs.
+ */
+export const TONNES_PER_LONG_TON = 1.0160469088;
+
+/**
  * The unit system of results and of lengths typed in a request: SI (m, t; the default)
  * or imperial (ft, long tons; core/report/imperial.ts converts results).
  */

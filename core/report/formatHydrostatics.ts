@@ -67,7 +67,8 @@ export function estimatedResult(hull: HullModel, density: number, rows: Hydrosta
 const ROW_UNITS: Record<string, UnitTree> = Object.fromEntries(HYDROSTATIC_FIELDS.map((f) => [f.key, f.unit]));
 const ESTIMATE_UNITS: Record<string, UnitTree> = Object.fromEntries(ERROR_ESTIMATE_FIELDS.map((f) => [f.key, f.unit]));
 
-function tableLines(r: HydrostaticResult, ctx: Parameters<AnswerForm<HydrostaticResult>['lines']>[1]): string[] {
+/** The lines that say what a hydrostatic table is of: the hull, the density (and the imperial units), the datum of x. */
+export function tableLines(r: HydrostaticResult, ctx: Parameters<AnswerForm<HydrostaticResult>['lines']>[1]): string[] {
   const u = ctx.u('m');
   return [
     `hull: ${r.hull.name}`,

@@ -41,6 +41,8 @@ export const IMPERIAL_UNITS: Readonly<Record<string, { unit: string; factor: num
   t: { unit: 'LT', factor: 1 / LT },
   't/cm': { unit: 'LT/in', factor: IN_CM / LT },
   't.m/cm': { unit: 'LT.ft/in', factor: IN_CM / (LT * FT) },
+  't.m': { unit: 'LT.ft', factor: 1 / (LT * FT) },
+  'm.rad': { unit: 'ft.rad', factor: 1 / FT },
   '-': { unit: '-', factor: 1 },
 };
 

@@ -4,6 +4,8 @@ export * from './formatAreas.js';
 export * from './formatBonjean.js';
 export * from './formatHydrostatics.js';
 export * from './formatSheet.js';
+export * from './formatStability.js';
+export * from './formatTrimmed.js';
 export * from './imperial.js';
 export * from './multiplierText.js';
 export * from './outputOptions.js';

@@ -10,6 +10,7 @@ import { CAUTION } from '../common/caution.js';
 export const TEXT_DECIMALS: Readonly<Record<string, number>> = {
   m: 3, m2: 2, m3: 3, m4: 1, t: 2, 't/cm': 3, 't.m/cm': 3,
   ft: 3, ft2: 1, ft3: 1, ft4: 0, LT: 2, 'LT/in': 3, 'LT.ft/in': 2,
+  deg: 2, 'm.rad': 4, 'ft.rad': 4, 't.m': 2, 'LT.ft': 2,
   '-': 4,
 };
 

@@ -12,7 +12,7 @@
 import { HalfbreadthError, type Issue } from '../common/errors.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
 import { hydrostaticsAt } from '../upright/hydrostatics.js';
-import { heeledFloat, HeelSweep } from './heeledFloat.js';
+import { heeledFloat, HeelSweep, knOf } from './heeledFloat.js';
 import { draftAtX } from './inclinedHydrostatics.js';
 import { levelDraftFor } from './levelDrafts.js';
 import { checkVolume } from './solveVolume.js';
@@ -32,7 +32,10 @@ export interface CrossCurveRow {
 
 export type TrimMode = 'level' | 'free';
 
-/** The cross curves at every displacement (t) and heel (degrees), rows by displacement then heel. */
+/**
+ * The cross curves at every displacement (t) and heel (degrees), rows by displacement then
+ * heel. `progress` hears of each displacement done (a long run on a terminal shows it).
+ */
 export function crossCurves(
   p: PreparedHull,
   displacements: readonly number[],
@@ -40,6 +43,7 @@ export function crossCurves(
   density: number,
   trim: TrimMode = 'level',
   deck: DeckEdges = { assumedAt: [] },
+  progress?: (done: number, total: number) => void,
 ): CrossCurveRow[] {
   checkHeels(heels, ['heels']);
   checkDeckEdges(p, heels, deck);
@@ -67,7 +71,7 @@ export function crossCurves(
       // The first heel starts from the level draft's waterplane.
       const fl = heeledFloat(p, volume, phi, lcb, sweep.guess(phi) ?? { h: d0 * Math.cos(phi), trimAngle: 0 });
       sweep.add(phi, fl.plane);
-      const kn = fl.values.yB * Math.cos(phi) + fl.values.zB * Math.sin(phi);
+      const kn = knOf(p, fl, phi);
       const across = Math.abs(Math.cos(phi)) > 1e-9;
       const draftAft = draftAtX(fl.plane, p.perp.ap);
       const draftFwd = draftAtX(fl.plane, p.perp.fp);
@@ -80,6 +84,7 @@ export function crossCurves(
       };
     }
     rows.push(...found);
+    progress?.(k + 1, displacements.length);
   });
   return rows;
 }

@@ -22,6 +22,7 @@ import type { PreparedHull } from '../hull/preparedHull.js';
 import { draftAtX, type InclinedValues, type Waterplane } from './inclinedHydrostatics.js';
 import { checkVolume, floatAt } from './solveVolume.js';
 import { levelDraftFor } from './levelDrafts.js';
+import { checkDeckEdges, type DeckEdges } from './stabilityInput.js';
 
 export interface Load {
   /** t */
@@ -69,12 +70,14 @@ function offsets(v: InclinedValues, w: Waterplane, g: { x: number; y: number; z:
   return [bx * cosT + by * sin * sinT - bz * cos * sinT, by * cos + bz * sin];
 }
 
-export function floatingPosition(p: PreparedHull, load: Load, density: number): FloatingPosition {
+/** The floating position of `load` in water of `density` (t/m³); `deck` says which deck edges the offsets leave unsaid, which a heeling TCG needs. */
+export function floatingPosition(p: PreparedHull, load: Load, density: number, deck: DeckEdges = { assumedAt: [] }): FloatingPosition {
   const volume = checkVolume(p, load.displacement, density, ['displacement']);
   const tcg = load.tcg ?? 0;
   if (tcg !== 0 && load.kg === undefined) {
     fail('HYD_BAD_ARGUMENT', ['kg'], `a TCG of ${tcg} m heels the hull by an amount that depends on the height of G: give KG as well`);
   }
+  if (tcg !== 0) checkDeckEdges(p, [tcg], deck);
   const lbp = p.perp.lbp;
   // Start level at the draft that floats the volume.
   const d0 = levelDraftFor(p, volume);
@@ -130,7 +133,8 @@ export function floatingPosition(p: PreparedHull, load: Load, density: number): 
     heel: (w.heel * 180) / Math.PI,
     draft: draftAtX(w, p.perp.xm),
     lcb: fl.values.xB,
-    tcb: fl.values.yB,
+    // Upright, the two sides' moments cancel to rounding (1e-17 m): say 0, as the symmetry does.
+    tcb: w.heel === 0 && Math.abs(fl.values.yB) <= 1e-12 * lbp ? 0 : fl.values.yB,
     vcb: fl.values.zB,
     residuals: { volume: fl.values.volume - volume, longitudinal: r1, transverse: r2 },
   };

@@ -18,6 +18,16 @@ export interface HeelState {
 }
 
 /**
+ * KN of a floated hull at heel φ (rad), m: yB cos φ + zB sin φ (the project's conventions).
+ * Upright, the two sides' moments cancel to rounding (1e-17 m); that is said as 0, as the
+ * symmetry has it.
+ */
+export function knOf(p: PreparedHull, fl: Floated, phi: number): number {
+  const kn = fl.values.yB * Math.cos(phi) + fl.values.zB * Math.sin(phi);
+  return phi === 0 && Math.abs(kn) <= 1e-12 * p.perp.lbp ? 0 : kn;
+}
+
+/**
  * The hull at heel `heel` (rad) floating `volume` (m³). With `lcb` given it is free to
  * trim until its centre of buoyancy lies at x = lcb; else level. `start` is a nearby
  * solution (the previous heel's).

@@ -24,7 +24,7 @@ import type { PreparedHull } from '../hull/preparedHull.js';
 import { hydrostaticsAt } from '../upright/hydrostatics.js';
 import { IMO_2008_GENERAL, judge, type CriteriaSet, type CriterionId, type CriterionResult } from './criteria.js';
 import type { TrimMode } from './crossCurves.js';
-import { heeledFloat, HeelSweep } from './heeledFloat.js';
+import { heeledFloat, HeelSweep, knOf } from './heeledFloat.js';
 import type { Waterplane } from './inclinedHydrostatics.js';
 import { levelDraftFor } from './levelDrafts.js';
 import { checkVolume } from './solveVolume.js';
@@ -138,7 +138,7 @@ export function rightingLevers(p: PreparedHull, input: GzInput, density: number)
     const phi = deg * RAD;
     const fl = heeledFloat(p, volume, phi, lcb, sweep.guess(phi) ?? { h: d0 * Math.cos(phi), trimAngle: 0 });
     sweep.add(phi, fl.plane);
-    const kn = fl.values.yB * Math.cos(phi) + fl.values.zB * Math.sin(phi);
+    const kn = knOf(p, fl, phi);
     const v = { gz: kn - kgEff * Math.sin(phi), plane: fl.plane };
     solved.set(deg, v);
     return v;

@@ -11,10 +11,11 @@
  * refused for such a table (HYD_DECK_NOT_GIVEN, naming the stations), and the deck_z and
  * deck_y columns of the grid form, or the points form, say where the deck edges are.
  */
-import { readDecimal } from '../common/decimal.js';
 import { fail } from '../common/errors.js';
 import { LIMITS } from '../common/limits.js';
 import { parseNumberList } from '../common/numberList.js';
+import { readTypedLength, TYPED_LENGTH_UNIT, typedMassFactor } from '../common/typedLength.js';
+import type { UnitSystem } from '../common/units.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
 import type { Opening } from './rightingLevers.js';
 
@@ -47,9 +48,11 @@ export function checkDeckEdges(p: PreparedHull, heels: readonly number[], deck: 
   );
 }
 
-/** Displacements, t: `5:2.5:15,16`. */
-export function parseDisplacements(text: string, path: readonly (string | number)[] = ['displacements']): number[] {
-  return parseNumberList(text, path, { noun: 'displacements', code: 'HYD_LOAD_OUT_OF_RANGE', max: LIMITS.maxDisplacements, example: '5:2.5:15,16' });
+/** Displacements `5:2.5:15,16`, in tonnes (long tons with imperial units); given in tonnes. */
+export function parseDisplacements(text: string, path: readonly (string | number)[] = ['displacements'], system: UnitSystem = 'si'): number[] {
+  const values = parseNumberList(text, path, { noun: 'displacements', code: 'HYD_LOAD_OUT_OF_RANGE', max: LIMITS.maxDisplacements, example: '5:2.5:15,16' });
+  const f = typedMassFactor(system);
+  return f === 1 ? values : values.map((v) => v * f);
 }
 
 /** Heels, degrees: `0:10:90` or `-30:5:30`; each within HEEL_RANGE, checked where they are used. */
@@ -57,14 +60,19 @@ export function parseHeels(text: string, path: readonly (string | number)[] = ['
   return parseNumberList(text, path, { noun: 'heels', code: 'HYD_ANGLE_RANGE', max: LIMITS.maxHeels, example: '0:10:90' });
 }
 
-/** Openings (downflooding points) `x,y,z;x,y,z`, m in the hull's frame; where each lies is checked against the hull later. */
-export function parseOpenings(text: string, path: readonly (string | number)[] = ['openings']): Opening[] {
+/**
+ * Openings (downflooding points) `x,y,z;x,y,z` in the hull's frame, metres (feet, decimal or
+ * feet-inches-eighths, with imperial units); given in metres. Where each lies is checked
+ * against the hull later (checkOpenings).
+ */
+export function parseOpenings(text: string, path: readonly (string | number)[] = ['openings'], system: UnitSystem = 'si'): Opening[] {
   const parts = text.split(';').map((s) => s.trim()).filter((s) => s !== '');
   if (parts.length > LIMITS.maxOpenings) fail('HYD_OPENING', path, `more than ${LIMITS.maxOpenings} openings`);
+  const unit = TYPED_LENGTH_UNIT[system];
   return parts.map((part, k) => {
-    const nums = part.split(',').map((s) => readDecimal(s.trim()));
+    const nums = part.split(',').map((s) => readTypedLength(s.trim(), system));
     if (nums.length !== 3 || nums.some((v) => !Number.isFinite(v))) {
-      fail('HYD_OPENING', [...path, k], `opening ${k + 1} "${part.slice(0, 40)}" is not a point x,y,z in metres (openings are separated by ;, e.g. 4.2,1.1,1.6;6,-0.9,1.8)`);
+      fail('HYD_OPENING', [...path, k], `opening ${k + 1} "${part.slice(0, 40)}" is not a point x,y,z in ${unit} (openings are separated by ;, e.g. 4.2,1.1,1.6;6,-0.9,1.8)`);
     }
     const [x, y, z] = nums as [number, number, number];
     return { x, y, z };

@@ -6,7 +6,7 @@
  */
 import { unit } from 'mathjs';
 import { describe, expect, test } from 'vitest';
-import { LENGTH_UNITS, lengthFactor } from '../../core/common/units.js';
+import { LENGTH_UNITS, lengthFactor, TONNES_PER_LONG_TON } from '../../core/common/units.js';
 
 describe('length factors', () => {
   test.each([
@@ -26,5 +26,11 @@ describe('length factors', () => {
 
   test('every unit of the offsets files has a factor', () => {
     for (const u of LENGTH_UNITS) expect(lengthFactor(u)).toBeGreaterThan(0);
+  });
+});
+
+describe('the long ton', () => {
+  test('2240 pounds, as mathjs defines the pound, in tonnes', () => {
+    expect(TONNES_PER_LONG_TON).toBeCloseTo(unit(2240, 'lbm').toNumber('t'), 15);
   });
 });

@@ -47,7 +47,7 @@ describe('openings', () => {
   });
 
   test('a point that is not three numbers is refused, naming it', () => {
-    expect(issueOf(() => parseOpenings('4.2,1.1,1.6;6,1.8'))).toMatch(/^HYD_OPENING \["openings",1\] opening 2 "6,1.8" is not a point x,y,z in metres/);
+    expect(issueOf(() => parseOpenings('4.2,1.1,1.6;6,1.8'))).toMatch(/^HYD_OPENING \["openings",1\] opening 2 "6,1.8" is not a point x,y,z in m/);
     expect(issueOf(() => parseOpenings('a,b,c'))).toMatch(/^HYD_OPENING/);
   });
 });
@@ -56,5 +56,16 @@ describe('the size of a set of cross curves', () => {
   test('at most the documented number of points', () => {
     expect(() => checkCrossCurveSize(20, 19)).not.toThrow();
     expect(issueOf(() => checkCrossCurveSize(200, 73))).toMatch(new RegExp(`^HYD_TOO_LARGE .*200 displacements x 73 heels is 14600 points of cross curves; at most ${LIMITS.maxCrossCurvePoints}`));
+  });
+});
+
+describe('imperial units', () => {
+  test('displacements in long tons and openings in feet are given in tonnes and metres', () => {
+    // 1 long ton = 1.0160469088 t and 1 ft = 0.3048 m, exactly (international yard and pound agreement, 1959).
+    expect(parseDisplacements('10,20', ['displacements'], 'imperial')).toEqual([10.160469088, 20.320938176]);
+    const [o] = parseOpenings('10,2-6-0,5', ['openings'], 'imperial');
+    expect(o!.x).toBeCloseTo(3.048, 12);
+    expect(o!.y).toBeCloseTo(0.762, 12);
+    expect(o!.z).toBeCloseTo(1.524, 12);
   });
 });
