@@ -13,6 +13,8 @@ export interface OptionSpec {
   readonly required?: boolean;
   /** Shown when a string option has no value, e.g. `0.2:0.1:1.2`. */
   readonly example?: string;
+  /** A string option that may be given more than once; its values reach the command joined by `;`. */
+  readonly repeatable?: boolean;
 }
 
 /** Parsed arguments: each option once at most, and the positionals in order. */

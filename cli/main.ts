@@ -97,7 +97,7 @@ export function parseCommandArgs(c: Command, args: readonly string[]): CommandAr
     const spec = specs[t.name];
     if (spec === undefined) {
       issues.push(bad(t.rawName, `unknown option ${t.rawName}; ${see}`));
-    } else if (values[t.name] !== undefined) {
+    } else if (values[t.name] !== undefined && spec.repeatable !== true) {
       issues.push(bad(t.rawName, `${t.rawName} is given more than once`));
     } else if (spec.type === 'boolean') {
       if (t.value !== undefined) issues.push(bad(t.rawName, `${t.rawName} takes no value (got '${t.value}')`));
@@ -107,7 +107,8 @@ export function parseCommandArgs(c: Command, args: readonly string[]): CommandAr
       const eg = spec.example === undefined ? '' : `, e.g. ${spec.example}`;
       issues.push(bad(t.rawName, `${t.rawName} needs a value${eg}`));
     } else {
-      values[t.name] = t.value;
+      const prior = values[t.name];
+      values[t.name] = typeof prior === 'string' ? `${prior};${t.value}` : t.value;
     }
   }
   if (!help) {

@@ -14,6 +14,11 @@ import { errorEstimates } from '../../core/upright/errorEstimate.js';
 import { requireFormedRows } from '../../core/upright/formedRows.js';
 import { hydrostaticTable } from '../../core/upright/hydrostatics.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
+import { TRIMMED_FORM, trimmedTableResult } from '../../core/report/formatTrimmed.js';
+import { draftsForDisplacements } from '../../core/stability/levelDrafts.js';
+import { parseDisplacements } from '../../core/stability/stabilityInput.js';
+import { trimmedHydrostaticTable } from '../../core/stability/trimmedHydrostatics.js';
+import { lengthOption } from '../stabilityOptions.js';
 import { answerOptions, converterOf, readOffsetsOf, writeResult } from '../answerOptions.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
@@ -35,12 +40,14 @@ export function densityOption(values: CommandArgs['values']): number {
 
 export const hydrostatics: Command = {
   name: 'hydrostatics',
-  summary: 'the upright hydrostatic table of a hull at a list of drafts',
-  synopsis: 'hydrostatics <file|-> --drafts <list> [options]',
+  summary: 'the hydrostatic table of a hull at a list of drafts or displacements, level or trimmed',
+  synopsis: 'hydrostatics <file|-> --drafts <list> | --displacements <list> [--trim <m>] [options]',
   positionals: ['<file|->'],
   answers: { formats: ['table', 'csv', 'json'], piped: 'csv' },
   options: {
-    drafts: { type: 'string', required: true, example: '--drafts 0.2:0.1:1.2,1.25' },
+    drafts: { type: 'string', example: '--drafts 0.2:0.1:1.2,1.25' },
+    displacements: { type: 'string', example: '--displacements 3:0.5:6' },
+    trim: { type: 'string', example: '--trim 0.2' },
     density: { type: 'string', example: '--density 1.025' },
     fresh: { type: 'boolean' },
     'error-estimate': { type: 'boolean' },
@@ -58,7 +65,14 @@ Options:
   --drafts <list>     drafts above the baseline, in metres (feet with --units
                       imperial): values and ranges from:step:to, comma-separated,
                       e.g. 0.2:0.1:1.2,1.25 or, in feet, 2-0-0:0-3-0:4-0-0
-                      (required)
+  --displacements <list>
+                      instead of --drafts: the displacements, tonnes (long tons
+                      with --units imperial), values and ranges; each row is at
+                      the draft that floats one of them ("what draft for 4.5 t")
+  --trim <m>          the table at this trim, m (ft with --units imperial):
+                      draft aft - draft forward, positive by the stern; draft
+                      is then the draft amidships, and each row adds draftAft,
+                      draftFwd and trim (so do rows found for --displacements)
   --density <t/m3>    water density, 0.9 to 1.1 (default 1.025, sea water)
   --fresh             fresh water: density 1.000
   --error-estimate    add to each row an estimate of the integration error of
@@ -91,7 +105,17 @@ Example:
     const issues: Issue[] = [];
     const { values } = args;
     const choice = attempt(() => answerOptions(args, ['table', 'csv', 'json'], 'csv', io), issues);
-    const drafts = attempt(() => parseDraftList(str(values['drafts']) ?? '', ['drafts'], choice?.output.units ?? 'si'), issues);
+    const system = choice?.output.units ?? 'si';
+    const byDisplacement = values['displacements'] !== undefined;
+    if (byDisplacement === (values['drafts'] !== undefined)) {
+      issues.push(issue('HYD_BAD_ARGUMENT', ['--drafts'], byDisplacement ? 'give --drafts or --displacements, not both' : '--drafts or --displacements is required (e.g. --drafts 0.2:0.1:1.2,1.25)'));
+    }
+    const drafts = byDisplacement || values['drafts'] === undefined ? undefined : attempt(() => parseDraftList(str(values['drafts']) ?? '', ['drafts'], system), issues);
+    const displacements = byDisplacement ? attempt(() => parseDisplacements(str(values['displacements']) ?? '', ['--displacements'], system), issues) : undefined;
+    const trim = attempt(() => lengthOption(values, 'trim', system), issues);
+    if (values['error-estimate'] === true && trim !== undefined && trim !== 0) {
+      issues.push(issue('HYD_BAD_ARGUMENT', ['--error-estimate'], '--error-estimate is given for the level table; leave out --trim for it'));
+    }
     const density = attempt(() => densityOption(values), issues);
     const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
     const read = input === undefined ? undefined : attempt(() => readOffsetsOf(input, choice), issues);
@@ -99,6 +123,20 @@ Example:
     const { hull } = read!;
     const conv = await converterOf(choice!);
     const prepared = prepareHull(hull);
+    if (displacements !== undefined || trim !== undefined) {
+      const held = trim ?? 0;
+      const at = displacements === undefined ? drafts! : draftsForDisplacements(prepared, displacements, density!, held);
+      const trimmed = trimmedHydrostaticTable(prepared, at, held, density!);
+      requireFormedRows(trimmed);
+      if (values['error-estimate'] === true) {
+        // Level rows found for displacements: the estimate of the level table at their drafts.
+        const est = errorEstimates(prepared, at, density!);
+        writeResult(io, ESTIMATED_FORM, estimatedResult(hull, density!, trimmed, est, conv), choice!, conv);
+      } else {
+        writeResult(io, TRIMMED_FORM, trimmedTableResult(hull, density!, trimmed, held, displacements ?? null, conv), choice!, conv);
+      }
+      return EXIT.ok;
+    }
     const rows = hydrostaticTable(prepared, drafts!, density!);
     requireFormedRows(rows);
     if (values['error-estimate'] === true) {

@@ -6,12 +6,15 @@ import type { Command } from '../command.js';
 import { areas } from './areas.js';
 import { bonjean } from './bonjean.js';
 import { check } from './check.js';
+import { crossCurvesCommand } from './crossCurves.js';
+import { float } from './float.js';
+import { gz } from './gz.js';
 import { hydrostatics } from './hydrostatics.js';
 import { plot } from './plot.js';
 import { report } from './report.js';
 import { sheet } from './sheet.js';
 
-export const COMMANDS: readonly Command[] = [hydrostatics, sheet, bonjean, areas, check, plot, report];
+export const COMMANDS: readonly Command[] = [hydrostatics, sheet, bonjean, areas, float, crossCurvesCommand, gz, check, plot, report];
 
 export function findCommand(name: string): Command | undefined {
   return COMMANDS.find((c) => c.name === name);

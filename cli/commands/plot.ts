@@ -13,20 +13,25 @@ import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
 import { readInput, str, type CliIo } from '../io.js';
 import { densityOption } from './hydrostatics.js';
+import { deckEdgesOf, STABILITY_OPTIONS, stabilityChoice } from '../stabilityOptions.js';
 import { singleDraft } from './draftOption.js';
+
+/** The plot parameter each option gives, where its name differs. */
+const PARAM_OF_OPTION: Readonly<Record<string, string>> = { fresh: 'density', 'free-trim': 'trim', 'level-trim': 'trim', opening: 'openings' };
 
 const w = Math.max(...HULL_PLOTS.map((p) => p.name.length));
 
 export const plot: Command = {
   name: 'plot',
-  summary: 'a plot as SVG: the lines, curves of form, Bonjean or sectional areas',
-  synopsis: 'plot <name> <file|-> [--drafts <list>] [--draft <m>] > plot.svg',
+  summary: 'a plot as SVG: the lines, curves of form, Bonjean, sectional areas, cross curves or GZ',
+  synopsis: 'plot <name> <file|-> [options] > plot.svg',
   positionals: ['<name>', '<file|->'],
   options: {
     drafts: { type: 'string', example: '--drafts 0.2:0.1:1.2' },
     draft: { type: 'string', example: '--draft 1.3' },
     density: { type: 'string', example: '--density 1.025' },
     fresh: { type: 'boolean' },
+    ...STABILITY_OPTIONS,
   },
   help: `Writes one plot of the hull as an SVG document on standard output, with axis
 titles and units, a title and description for screen readers, and the caution.
@@ -43,8 +48,19 @@ Options:
                       drafts from the keel to the lowest deck edge); bonjean:
                       extra heights, m
   --draft <m>         sectional-areas: the draft, m (required)
-  --density <t/m3>    curves-of-form: water density (default 1.025, sea water)
-  --fresh             curves-of-form: fresh water, 1.000
+  --density <t/m3>    curves-of-form, cross-curves, gz: water density (default
+                      1.025, sea water)
+  --fresh             the same: fresh water, 1.000
+  --displacements <list>  cross-curves: the displacements, t (required)
+  --heels <list>      cross-curves: the heels, degrees (default 0:10:90); gz:
+                      the heels of the points drawn (default 0:5:90)
+  --free-trim         cross-curves: free to trim as the hull heels
+  --level-trim        gz: kept at level trim as the hull heels
+  --displacement <t>  gz: the displacement of the loading (required)
+  --kg <m>            gz: the height of G above the baseline (required)
+  --fsm <t.m>         gz: the free-surface moment (default 0)
+  --opening x,y,z     gz: a downflooding point, m; once for each
+  --criteria <file>   gz: a criteria set as JSON (see 'halfbreadth gz --help')
   -h, --help          this help
 
 Exit status: 0 done; 2 bad input.
@@ -58,15 +74,18 @@ Example:
     const chosen = findHullPlot(name);
     if (chosen === undefined) issues.push(issue('HYD_BAD_ARGUMENT', ['argv'], `there is no plot '${name.slice(0, 40)}'; the plots are ${HULL_PLOTS.map((p) => p.name).join(', ')}`));
     const takes = new Set<string>(chosen?.takes ?? []);
-    for (const option of ['drafts', 'draft', 'density', 'fresh']) {
+    for (const option of Object.keys(plot.options)) {
       const given = values[option] !== undefined;
-      const takesIt = takes.has(option === 'fresh' ? 'density' : option);
+      const takesIt = takes.has(PARAM_OF_OPTION[option] ?? option);
       if (chosen !== undefined && given && !takesIt) issues.push(issue('HYD_BAD_ARGUMENT', [`--${option}`], `the ${name} plot takes no --${option}`));
     }
-    if (chosen !== undefined && takes.has('draft') && values['draft'] === undefined) issues.push(issue('HYD_BAD_ARGUMENT', ['--draft'], `the ${name} plot needs --draft <m>, e.g. --draft 1.3`));
+    for (const need of chosen?.needs ?? []) {
+      if (values[need] === undefined) issues.push(issue('HYD_BAD_ARGUMENT', [`--${need}`], `the ${name} plot needs --${need}, e.g. ${plot.options[need]?.example ?? `--${need} <value>`}`));
+    }
     const drafts = values['drafts'] === undefined ? undefined : attempt(() => parseDraftList(str(values['drafts']) ?? '', ['drafts']), issues);
     const draft = values['draft'] === undefined ? undefined : attempt(() => singleDraft(str(values['draft'])), issues);
     const density = attempt(() => densityOption(values), issues);
+    const stability = await stabilityChoice(values, io, issues);
     const input = await attemptAsync(() => readInput(args.positionals[1]!, io), issues);
     const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
     throwIfAny(issues);
@@ -74,6 +93,8 @@ Example:
     io.stdout.write(
       chosen.render(prepareHull(read!.hull), {
         density: density!,
+        deck: deckEdgesOf(read!),
+        ...stability,
         ...(drafts === undefined ? {} : { drafts }),
         ...(draft === undefined ? {} : { draft }),
       }),

@@ -4,11 +4,14 @@
  * `--pdf <file>`, printed to PDF by a Chromium installed on the machine.
  */
 import { createHash } from 'node:crypto';
-import { fail, type Issue } from '../../core/common/errors.js';
+import { fail, issue, type Issue } from '../../core/common/errors.js';
 import { parseDraftList } from '../../core/common/draftList.js';
 import { PAPER_SIZES, reportDate, reportHtml, type PaperSize } from '../../core/document/reportHtml.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { CROSS_CURVE_HEELS } from '../../core/plots/plotCatalogue.js';
+import { crossCurves } from '../../core/stability/crossCurves.js';
+import { rightingLevers } from '../../core/stability/rightingLevers.js';
 import { attempt, attemptAsync, throwIfAny } from '../collect.js';
 import type { Command, CommandArgs } from '../command.js';
 import { EXIT } from '../command.js';
@@ -16,6 +19,7 @@ import { readInput, str, type CliIo } from '../io.js';
 import { findBrowser, INSTALL_BROWSER, printPdf } from '../printPdf.js';
 import { densityOption } from './hydrostatics.js';
 import { singleDraft } from './draftOption.js';
+import { deckEdgesOf, STABILITY_OPTIONS, stabilityChoice } from '../stabilityOptions.js';
 
 function paperOption(text: string | undefined): PaperSize {
   if (text === undefined) return 'a4';
@@ -36,11 +40,14 @@ export const report: Command = {
     draft: { type: 'string', example: '--draft 1.3' },
     density: { type: 'string', example: '--density 1.025' },
     fresh: { type: 'boolean' },
+    ...STABILITY_OPTIONS,
   },
   help: `Writes one self-contained HTML document for print: the hull's particulars, the
 table of offsets, the lines, the hydrostatic table and the curves of form, the
 Bonjean curves and the sectional-area curve, the sha256 of the input and the
-date, with the caution printed on every page.
+date, with the caution printed on every page. With --displacements it also
+holds the cross curves of stability; with --displacement and --kg the
+righting-lever curve of that loading and the verdicts of the criteria.
 
 Arguments:
   <file|->            offsets CSV, grid or points form; - reads standard input
@@ -56,6 +63,15 @@ Options:
                       draft of the table)
   --density <t/m3>    water density (default 1.025, sea water)
   --fresh             fresh water, 1.000
+  --displacements <list>  cross curves at these displacements, t
+  --heels <list>      their heels, degrees (default 0:10:90)
+  --free-trim         the cross curves free to trim (default level)
+  --displacement <t>  the loading of the GZ curve, t (with --kg)
+  --kg <m>            its height of G above the baseline, m
+  --fsm <t.m>         its free-surface moment (default 0)
+  --opening x,y,z     a downflooding point, m; once for each
+  --criteria <file>   a criteria set as JSON (see 'halfbreadth gz --help')
+  --level-trim        the GZ curve at level trim (default free)
   -h, --help          this help
 
 Exit status: 0 done; 2 bad input; 3 --pdf and no Chromium installed (the
@@ -72,10 +88,26 @@ Examples:
     const drafts = values['drafts'] === undefined ? undefined : attempt(() => parseDraftList(str(values['drafts']) ?? '', ['drafts']), issues);
     const draft = values['draft'] === undefined ? undefined : attempt(() => singleDraft(str(values['draft'])), issues);
     const density = attempt(() => densityOption(values), issues);
+    const stability = await stabilityChoice(values, io, issues);
+    if ((values['displacement'] !== undefined) !== (values['kg'] !== undefined)) {
+      issues.push(issue('HYD_BAD_ARGUMENT', [values['kg'] === undefined ? '--kg' : '--displacement'], 'the righting levers need a loading: give --displacement and --kg together'));
+    }
     const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
     const read = input === undefined ? undefined : attempt(() => readOffsetsCsv(input.text), issues);
     throwIfAny(issues);
     const prepared = prepareHull(read!.hull);
+    const deck = deckEdgesOf(read!);
+    const { displacements, heels, displacement, kg, fsm, openings, criteria } = stability;
+    const crossTrim = values['free-trim'] === true ? 'free' : 'level';
+    const crossCurveRows = displacements === undefined ? undefined : crossCurves(prepared, displacements, heels ?? CROSS_CURVE_HEELS, density!, crossTrim, deck);
+    const gzResult =
+      displacement === undefined || kg === undefined
+        ? undefined
+        : rightingLevers(
+            prepared,
+            { displacement, kg, deck, trim: values['level-trim'] === true ? 'level' : 'free', ...(fsm === undefined ? {} : { fsm }), ...(openings === undefined ? {} : { openings }), ...(criteria === undefined ? {} : { criteria }) },
+            density!,
+          );
     const html = reportHtml({
       prepared,
       form: read!.form,
@@ -86,6 +118,10 @@ Examples:
       density: density!,
       ...(drafts === undefined ? {} : { drafts }),
       ...(draft === undefined ? {} : { areasDraft: draft }),
+      stability: {
+        ...(crossCurveRows === undefined ? {} : { crossCurves: { rows: crossCurveRows, trim: crossTrim } }),
+        ...(gzResult === undefined ? {} : { gz: { result: gzResult } }),
+      },
     });
     const pdf = str(values['pdf']);
     if (pdf === undefined) {

@@ -295,7 +295,7 @@ describe('bad input', () => {
   });
 
   test.each([
-    [['hydrostatics', WORKBOAT], /--drafts is required/],
+    [['hydrostatics', WORKBOAT], /--drafts or --displacements is required/],
     [['hydrostatics', '--drafts', '1'], /missing <file\|->/],
     [['hydrostatics', WORKBOAT, '--drafts'], /--drafts needs a value/],
     [['hydrostatics', WORKBOAT, '--drafts', '--format', 'csv'], /--drafts needs a value/],
