@@ -14,6 +14,7 @@ import { readTypedLength, TYPED_LENGTH_HINT, typedLengthFactor } from '../core/c
 import type { UnitSystem } from '../core/common/units.js';
 import { LIMITS } from '../core/common/limits.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
+import { STABILITY_IMPERIAL_FORMS } from './stabilityFields.js';
 import { addCoreIssues, type FieldCodes } from './validate.js';
 
 /** Codes of issues on each field, for issues zod raises itself (a wrong type, a missing field). */
@@ -131,6 +132,9 @@ export const HeightsQuery = heightsQuery('si');
 export const HeightsBody = heightsBody('si');
 export const DraftQuery = draftQuery('si');
 export const DraftBody = draftBody('si');
+/** Drafts where a request may give displacements instead (the hydrostatic table). */
+export const OptionalDraftsQuery = draftsQuery('si').optional();
+export const OptionalDraftsBody = draftsBody('si').optional();
 
 /** Each length field of a request (as a computation declares it) and its form for lengths typed in feet. */
 export const IMPERIAL_FORMS: ReadonlyMap<z.ZodType, z.ZodType> = new Map<z.ZodType, z.ZodType>([
@@ -140,6 +144,9 @@ export const IMPERIAL_FORMS: ReadonlyMap<z.ZodType, z.ZodType> = new Map<z.ZodTy
   [HeightsBody, heightsBody('imperial')],
   [DraftQuery, draftQuery('imperial')],
   [DraftBody, draftBody('imperial')],
+  [OptionalDraftsQuery, draftsQuery('imperial').optional()],
+  [OptionalDraftsBody, draftsBody('imperial').optional()],
+  ...STABILITY_IMPERIAL_FORMS,
 ]);
 
 /** A request schema with its length fields read in the unit system (feet for imperial). */

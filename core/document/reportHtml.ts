@@ -28,7 +28,9 @@ import { linesPlot } from '../plots/linesPlot.js';
 import { defaultDrafts } from '../plots/plotCatalogue.js';
 import { short, unitText } from '../plots/scaleText.js';
 import { sectionalAreaPlot } from '../plots/sectionalAreaPlot.js';
-import type { CrossCurvePoint as CrossCurveRow, GzCurve as GzResult } from '../plots/stabilityShapes.js';
+import type { CrossCurvePoint as CrossCurveRow } from '../plots/stabilityShapes.js';
+import { CRITERIA_NOTES } from '../stability/criteria.js';
+import type { GzResult } from '../stability/rightingLevers.js';
 import { esc } from '../plots/svg.js';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
@@ -37,7 +39,7 @@ export type PaperSize = (typeof PAPER_SIZES)[number];
 /** Stability results to print, when they have been computed (each part optional). */
 export interface ReportStability {
   readonly crossCurves?: { readonly rows: readonly CrossCurveRow[]; readonly trim?: 'level' | 'free' };
-  readonly gz?: { readonly result: GzResult; readonly displacement: number; readonly kg: number };
+  readonly gz?: { readonly result: GzResult };
 }
 
 export interface ReportInput {
@@ -153,10 +155,13 @@ function stabilitySections(name: string, s: ReportStability | undefined): string
   }
   if (s?.gz !== undefined) {
     const g = s.gz;
-    parts.push(`<h2>Righting levers at ${esc(short(g.displacement))} t, KG ${esc(short(g.kg))} m</h2>`, figure(gzPlot({ name, result: g.result, displacement: g.displacement, kg: g.kg })));
+    const { displacement, kg, fsm } = g.result;
+    const fs = fsm > 0 ? `, free-surface moment ${esc(short(fsm))} t·m` : '';
+    parts.push(`<h2>Righting levers at ${esc(short(displacement))} t, KG ${esc(short(kg))} m${fs}</h2>`, figure(gzPlot({ name, result: g.result, displacement, kg })));
     parts.push(
+      `<p>Criteria: ${esc(g.result.criteriaSet.name)} (${esc(g.result.criteriaSet.source)}).</p>`,
       table(['Criterion', 'Verdict'], g.result.criteria.map((c) => [criterionWords(c), c.pass ? 'pass' : 'FAIL'])),
-      '<p class="note">A small craft, or a vessel under a classification society\'s or a flag\'s rules, may be held to other criteria. The severe wind and rolling (weather) criterion is not checked.</p>',
+      ...CRITERIA_NOTES.map((n) => `<p class="note">${esc(n)}</p>`),
     );
   }
   if (parts.length === 0) parts.push('<h2>Stability</h2><p>This report gives the upright hydrostatics only: it holds no cross curves, righting levers or stability criteria.</p>');

@@ -6,7 +6,10 @@ import type { AnyComputation } from './computation.js';
 import { areas } from './areas.js';
 import { bonjean } from './bonjean.js';
 import { check } from './check.js';
+import { crossCurvesComputation } from './crossCurves.js';
+import { float } from './float.js';
+import { gz } from './gz.js';
 import { hydrostatics } from './hydrostatics.js';
 import { sheet } from './sheet.js';
 
-export const COMPUTATIONS: readonly AnyComputation[] = [hydrostatics, sheet, bonjean, areas, check];
+export const COMPUTATIONS: readonly AnyComputation[] = [hydrostatics, sheet, bonjean, areas, float, crossCurvesComputation, gz, check];

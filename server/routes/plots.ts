@@ -7,7 +7,12 @@
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { z } from 'zod';
 import { SEA_WATER_DENSITY } from '../../core/common/constants.js';
-import { HULL_PLOTS, type HullPlot, type HullPlotParams } from '../../core/plots/plotCatalogue.js';
+import { deckAssumedAt } from '../../core/offsets/readingWarnings.js';
+import { HULL_PLOTS, type HullPlot, type HullPlotParams, type PlotParam } from '../../core/plots/plotCatalogue.js';
+import type { DeckEdges } from '../../core/stability/stabilityInput.js';
+import type { ServiceContext } from '../context.js';
+import { computationNamed } from '../jobs/job.js';
+import { computedResult, postedHullAt, storedHullAt, type HullAt } from './computedResult.js';
 import { HullModelSchema } from '../../core/hull/hullModel.js';
 import { answerNotModified, etagOf } from '../etag.js';
 import { hullFromCsv, hullFromJson, loadHull, type LoadedHull } from '../hullInput.js';
@@ -21,32 +26,50 @@ export const SVG_MEDIA_TYPE = 'image/svg+xml; charset=utf-8';
 /** An SVG answer runs nothing and loads nothing, even when opened on its own. */
 const SVG_POLICY = "default-src 'none'; style-src 'unsafe-inline'";
 
+/** The query field of each parameter a plot takes (core/plots/plotCatalogue.ts); the stability ones are the computations' own. */
+function fieldOf(plot: HullPlot, param: PlotParam): z.ZodType {
+  switch (param) {
+    case 'drafts':
+      return DraftsQuery.optional().describe(
+        plot.name === 'bonjean'
+          ? 'extra heights, m, at which each station\'s area is also drawn: values and ranges from:step:to'
+          : 'drafts, m: values and ranges from:step:to (default: about twenty round drafts from the keel to the lowest deck edge)',
+      );
+    case 'draft':
+      return DraftQuery;
+    case 'density':
+      return DensityQuery;
+    default: {
+      const c = computationNamed(plot.of!.computation);
+      return c.query.shape[param] as z.ZodType;
+    }
+  }
+}
+
 /** The query of a plot: the parameters of the computation it draws. */
 function plotQuery(plot: HullPlot): z.ZodObject {
-  const shape: Record<string, z.ZodType> = {};
-  if (plot.takes.includes('drafts')) {
-    shape['drafts'] = DraftsQuery.optional().describe(
-      plot.name === 'bonjean'
-        ? 'extra heights, m, at which each station\'s area is also drawn: values and ranges from:step:to'
-        : 'drafts, m: values and ranges from:step:to (default: about twenty round drafts from the keel to the lowest deck edge)',
-    );
-  }
-  if (plot.takes.includes('draft')) shape['draft'] = DraftQuery;
-  if (plot.takes.includes('density')) shape['density'] = DensityQuery;
-  return z.object(shape).strict();
+  return z.object(Object.fromEntries(plot.takes.map((t) => [t, fieldOf(plot, t)]))).strict();
 }
 
 function paramsOf(q: Record<string, unknown>): HullPlotParams {
-  return {
-    ...(q['drafts'] === undefined ? {} : { drafts: q['drafts'] as number[] }),
-    ...(q['draft'] === undefined ? {} : { draft: q['draft'] as number }),
-    density: (q['density'] as number | undefined) ?? SEA_WATER_DENSITY,
-  };
+  const out: Record<string, unknown> = { density: (q['density'] as number | undefined) ?? SEA_WATER_DENSITY };
+  for (const [k, v] of Object.entries(q)) if (v !== undefined && k !== 'density') out[k] = v;
+  return out as unknown as HullPlotParams;
 }
 
 /** Canonical text of the parameters, for the ETag. */
 function keyOf(p: HullPlotParams): string {
-  return `drafts=${p.drafts?.join(',') ?? ''}&draft=${p.draft ?? ''}&density=${p.density}`;
+  return JSON.stringify(Object.entries(p).sort(([a], [b]) => a.localeCompare(b)));
+}
+
+/**
+ * The SVG of a plot. A plot of a computation is computed as that computation is (on this
+ * thread or in a worker, by its declared cost; computedResult.ts) and drawn here from its
+ * JSON; the others are drawn from the hull at once.
+ */
+async function renderPlot(ctx: ServiceContext, req: FastifyRequest, plot: HullPlot, params: HullPlotParams, at: HullAt): Promise<string> {
+  if (plot.of === undefined) return plot.render(at.h.prepared, { ...params, deck: deckOf(at.h) });
+  return plot.of.draw(at.h.hull.name, await computedResult(ctx, req, plot.of.computation, params, at));
 }
 
 function sendSvg(reply: FastifyReply, svg: string, filename: string): FastifyReply {
@@ -60,6 +83,9 @@ export function postedHull(req: FastifyRequest): LoadedHull {
   const body = parseOrFail(PostedModel, requireObject(parseJsonText(upload.text), '{"offsets": <hull model>}'), FIELD_CODES);
   return loadHull(hullFromJson(body.offsets));
 }
+
+/** The deck edges the offsets leave unsaid (heeled plots refuse them). */
+const deckOf = (h: LoadedHull): DeckEdges => ({ assumedAt: deckAssumedAt(h.notes()) });
 
 const PostedModel = z.object({ offsets: z.custom<unknown>((v) => v !== undefined, { error: 'offsets is required: the hull model, lengths in m' }) }).strict();
 export const PostedModelDocument = z.object({ offsets: HullModelSchema }).strict();
@@ -79,14 +105,14 @@ function getRoute(plot: HullPlot): RouteSpec {
       304: { description: 'the copy named in If-None-Match is current' },
     },
     problems: [400, 404, 422],
-    handler: (req, reply, ctx) => {
+    handler: async (req, reply, ctx) => {
       const meta = requireHullMeta(ctx.store, req);
       const params = paramsOf(parseOrFail(query, req.query, FIELD_CODES));
       const etag = etagOf([meta.hash, meta.name, 'plot', plot.name, keyOf(params)]);
       if (answerNotModified(req, reply, etag)) return reply;
       let answer = ctx.answers.get(etag);
       if (answer === undefined) {
-        answer = { mediaType: SVG_MEDIA_TYPE, body: plot.render(ctx.cache.get(meta).prepared, params), filename: `${meta.id}-${plot.name}.svg` };
+        answer = { mediaType: SVG_MEDIA_TYPE, body: await renderPlot(ctx, req, plot, params, storedHullAt(ctx, meta)), filename: `${meta.id}-${plot.name}.svg` };
         ctx.answers.set(etag, answer);
       }
       return sendSvg(reply, answer.body, answer.filename ?? `${plot.name}.svg`);
@@ -107,9 +133,9 @@ function postRoute(plot: HullPlot): RouteSpec {
     body: { csv: true, json: PostedModelDocument },
     responses: { 200: { description: 'the plot', other: { mediaType: 'image/svg+xml', description: 'an SVG document' } } },
     problems: [400, 413, 415, 422],
-    handler: (req, reply) => {
+    handler: async (req, reply, ctx) => {
       const params = paramsOf(parseOrFail(query, req.query, FIELD_CODES));
-      return sendSvg(reply, plot.render(postedHull(req).prepared, params), `${plot.name}.svg`);
+      return sendSvg(reply, await renderPlot(ctx, req, plot, params, postedHullAt(req, postedHull(req))), `${plot.name}.svg`);
     },
   };
 }

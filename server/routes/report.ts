@@ -5,7 +5,14 @@
  */
 import { createHash } from 'node:crypto';
 import { z } from 'zod';
-import { PAPER_SIZES, reportDate, reportHtml } from '../../core/document/reportHtml.js';
+import type { FastifyRequest } from 'fastify';
+import { fail } from '../../core/common/errors.js';
+import { PAPER_SIZES, reportDate, reportHtml, type ReportStability } from '../../core/document/reportHtml.js';
+import type { CrossCurveRow } from '../../core/stability/crossCurves.js';
+import type { GzResult } from '../../core/stability/rightingLevers.js';
+import type { ServiceContext } from '../context.js';
+import { CriteriaQuery, DisplacementQuery, DisplacementsQuery, FsmQuery, heelsQuery, LENGTH_FIELDS, OpeningsQuery } from '../stabilityFields.js';
+import { computedResult, postedHullAt, storedHullAt, type HullAt } from './computedResult.js';
 import type { LoadedHull } from '../hullInput.js';
 import { uploadOf } from '../plugins/uploadBody.js';
 import { DensityQuery, DraftQuery, DraftsQuery, FIELD_CODES } from '../requestFields.js';
@@ -24,10 +31,38 @@ const ReportQuery = z
     drafts: DraftsQuery.optional().describe('drafts of the hydrostatic table, m: values and ranges from:step:to (default: about twenty round drafts from the keel to the lowest deck edge)'),
     draft: DraftQuery.optional().describe('draft of the sectional-area curve, m (default: the middle draft of the table)'),
     density: DensityQuery,
+    displacements: DisplacementsQuery.optional().describe('displacements of the cross curves of stability, t, printed when given: values and ranges from:step:to'),
+    heels: heelsQuery('0:10:90'),
+    displacement: DisplacementQuery.optional().describe('displacement of the loading whose righting levers and criteria are printed, t (with kg)'),
+    kg: LENGTH_FIELDS.kg.optionalQuery,
+    fsm: FsmQuery,
+    openings: OpeningsQuery,
+    criteria: CriteriaQuery,
   })
   .strict();
 
-function render(h: LoadedHull, sha256: string, q: z.output<typeof ReportQuery>): string {
+type ReportParams = z.output<typeof ReportQuery>;
+
+/**
+ * The stability the report prints, when asked for: the cross curves at level trim, and the
+ * righting levers of a loading free to trim, each computed as its own route computes it.
+ */
+async function stabilityOf(ctx: ServiceContext, req: FastifyRequest, q: ReportParams, at: HullAt): Promise<ReportStability> {
+  if ((q.displacement === undefined) !== (q.kg === undefined)) {
+    fail('HYD_BAD_ARGUMENT', [q.kg === undefined ? 'kg' : 'displacement'], 'the righting levers need a loading: give displacement and kg together');
+  }
+  const cross =
+    q.displacements === undefined
+      ? undefined
+      : ((await computedResult(ctx, req, 'cross-curves', { displacements: q.displacements, heels: q.heels, trim: 'level', density: q.density }, at)) as { rows: CrossCurveRow[] });
+  const gz =
+    q.displacement === undefined || q.kg === undefined
+      ? undefined
+      : ((await computedResult(ctx, req, 'gz', { displacement: q.displacement, kg: q.kg, fsm: q.fsm, openings: q.openings, criteria: q.criteria, trim: 'free', density: q.density }, at)) as GzResult);
+  return { ...(cross === undefined ? {} : { crossCurves: { rows: cross.rows, trim: 'level' } }), ...(gz === undefined ? {} : { gz: { result: gz } }) };
+}
+
+function render(h: LoadedHull, sha256: string, q: ReportParams, stability: ReportStability): string {
   return reportHtml({
     prepared: h.prepared,
     form: h.form,
@@ -38,6 +73,7 @@ function render(h: LoadedHull, sha256: string, q: z.output<typeof ReportQuery>):
     density: q.density,
     ...(q.drafts === undefined ? {} : { drafts: q.drafts }),
     ...(q.draft === undefined ? {} : { areasDraft: q.draft }),
+    stability,
   });
 }
 
@@ -50,15 +86,17 @@ export const REPORT_ROUTES: readonly RouteSpec[] = [
     operationId: 'reportOfOffsets',
     tag: 'compute',
     summary: 'Printable report of offsets in the body',
-    description: 'One self-contained HTML document for print (A4 or US letter): particulars, offsets, lines, hydrostatic table and curves, Bonjean and sectional areas, the sha256 of the body, the date, and the caution on every page.',
+    description: 'One self-contained HTML document for print (A4 or US letter): particulars, offsets, lines, hydrostatic table and curves, Bonjean and sectional areas, the cross curves and the righting levers with the criteria when asked for, the sha256 of the body, the date, and the caution on every page.',
     query: ReportQuery,
     body: { csv: true, json: PostedModelDocument },
     responses: ANSWER,
     problems: [400, 413, 415, 422],
-    handler: (req, reply) => {
+    handler: async (req, reply, ctx) => {
       const q = parseOrFail(ReportQuery, req.query, FIELD_CODES);
       const sha = createHash('sha256').update(uploadOf(req).bytes).digest('hex');
-      return reply.type(HTML).header('content-security-policy', REPORT_POLICY).send(render(postedHull(req), sha, q));
+      const h = postedHull(req);
+      const stability = await stabilityOf(ctx, req, q, postedHullAt(req, h));
+      return reply.type(HTML).header('content-security-policy', REPORT_POLICY).send(render(h, sha, q, stability));
     },
   },
   {
@@ -67,18 +105,20 @@ export const REPORT_ROUTES: readonly RouteSpec[] = [
     operationId: 'reportOfStoredHull',
     tag: 'compute',
     summary: 'Printable report of a stored hull',
-    description: 'One self-contained HTML document for print (A4 or US letter): particulars, offsets, lines, hydrostatic table and curves, Bonjean and sectional areas, the sha256 of the stored upload, the date, and the caution on every page.',
+    description: 'One self-contained HTML document for print (A4 or US letter): particulars, offsets, lines, hydrostatic table and curves, Bonjean and sectional areas, the cross curves and the righting levers with the criteria when asked for, the sha256 of the stored upload, the date, and the caution on every page.',
     query: ReportQuery,
     responses: ANSWER,
     problems: [400, 404, 422],
-    handler: (req, reply, ctx) => {
+    handler: async (req, reply, ctx) => {
       const meta = requireHullMeta(ctx.store, req);
       const q = parseOrFail(ReportQuery, req.query, FIELD_CODES);
+      const at = storedHullAt(ctx, meta);
+      const stability = await stabilityOf(ctx, req, q, at);
       return reply
         .type(HTML)
         .header('content-security-policy', REPORT_POLICY)
         .header('content-disposition', `inline; filename="${meta.id}-report.html"`)
-        .send(render(ctx.cache.get(meta), meta.hash, q));
+        .send(render(at.h, meta.hash, q, stability));
     },
   },
 ];

@@ -273,7 +273,10 @@ describe('the GZ curve', () => {
 describe('the catalogue', () => {
   test('every plot of a hull renders to a parseable SVG with its title, description and caution', () => {
     const p = box();
-    for (const plot of HULL_PLOTS) expectAccessibleFrame(plot.render(p, { density: RHO, draft: 1 }));
+    // The box's displacement at 1 m and a KG well under its KMt: a loading it floats.
+    const at1m = L * B * 1 * RHO;
+    const params = { density: RHO, draft: 1, displacements: [0.5 * at1m, at1m], displacement: at1m, kg: 1 };
+    for (const plot of HULL_PLOTS) expectAccessibleFrame(plot.render(p, params));
   });
 
   test('text from the offsets is escaped, so a hull name cannot break the SVG', () => {
