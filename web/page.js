@@ -112,7 +112,7 @@ function defaultRange(keel, deck) {
 }
 
 async function showHull() {
-  for (const id of ['hull-section', 'lines-section', 'hydro-section', 'sheet-section']) $(id).hidden = true;
+  for (const id of ['hull-section', 'lines-section', 'hydro-section', 'sheet-section', 'loading-section', 'cross-section']) $(id).hidden = true;
   say(`Reading ${source.name}…`);
   const check = await ask('check');
   $('hull-section').hidden = false;
@@ -159,6 +159,7 @@ async function showHull() {
   showSvg('lines-figure', await ask('lines', {}, { svg: true }));
   $('lines-section').hidden = false;
   await Promise.all([showHydrostatics(), showSheet()]);
+  await prepareStability(range);
   say(`Showing ${h.name}.`);
 }
 
@@ -265,6 +266,137 @@ async function showSheet() {
   showSvg('areas-figure', await ask('sectional-areas', { draft }, { svg: true }));
 }
 
+/** A round number near v, for the first values of a form: two significant digits. */
+const round2 = (v) => String(Number(v.toPrecision(2)));
+
+/**
+ * The stability forms of a hull: the displacement at the middle draft to start the
+ * loading with (KG is left for the user: it is the loading's, not the hull's), and the
+ * cross curves over the displacements of the table. Heeled work needs each station's
+ * deck edge; where the offsets leave it unsaid the service says so and the sections
+ * show that instead.
+ */
+async function prepareStability(range) {
+  $('loading-problem').textContent = '';
+  $('cross-problem').textContent = '';
+  let rows;
+  try {
+    rows = (await ask('hydrostatics', { drafts: `${range.from}:${range.step}:${range.to}`, density: $('density').value.trim() })).rows;
+  } catch {
+    return;
+  }
+  const mid = rows.find((r) => String(r.draft) === range.mid) ?? rows[rows.length >> 1];
+  $('load-displacement').value = round2(mid.displacement);
+  $('load-kg').value = '';
+  $('load-lcg').value = '';
+  $('loading-results').replaceChildren();
+  $('gz-figure').replaceChildren();
+  $('criteria-table').tHead.replaceChildren();
+  $('criteria-table').tBodies[0].replaceChildren();
+  $('criteria-notes').replaceChildren();
+  $('loading-section').hidden = false;
+  const lo = rows[1]?.displacement ?? rows[0].displacement;
+  const hi = rows[rows.length - 1].displacement;
+  const step = roundStep(hi - lo);
+  $('cross-from').value = trim(Math.ceil(lo / step) * step);
+  $('cross-step').value = trim(step);
+  $('cross-to').value = trim(Math.floor(hi / step) * step);
+  $('cross-section').hidden = false;
+  await showCrossCurves();
+}
+
+function loadingQuery() {
+  const q = {
+    displacement: $('load-displacement').value.trim(),
+    kg: $('load-kg').value.trim(),
+    fsm: $('load-fsm').value.trim(),
+    trim: $('load-free').checked ? 'free' : 'level',
+    density: $('density').value.trim(),
+  };
+  return q;
+}
+
+const CRITERION_NAMES = {
+  'area-0-30': 'Area under GZ, 0° to 30°', 'area-0-40': 'Area under GZ, 0° to 40° or downflooding', 'area-30-40': 'Area under GZ, 30° to 40° or downflooding',
+  'gz-at-30': 'GZ at 30° or more', 'angle-of-max-gz': 'Angle of the largest GZ', gm0: 'Initial GM (GM0)',
+};
+const UNIT_TEXT = { 'm.rad': 'm·rad', m: 'm', deg: '°' };
+
+async function showLoading() {
+  $('loading-problem').textContent = '';
+  const q = loadingQuery();
+  const lcg = $('load-lcg').value.trim();
+  let gz;
+  let floated = null;
+  try {
+    [gz, floated] = await Promise.all([
+      ask('gz', q),
+      lcg === '' ? null : ask('float', { displacement: q.displacement, lcg, kg: q.kg, density: q.density }),
+    ]);
+  } catch (e) {
+    $('loading-problem').textContent = e.message;
+    return;
+  }
+  const pairs = [
+    ['KG with free surface', `${cell(gz.kgEffective, 'm')} m (KG ${cell(gz.kg, 'm')} m + FSM / displacement)`],
+    ['GM0', `${cell(gz.gm0, 'm')} m`],
+    ['Largest GZ', `${cell(gz.maxGz, 'm')} m at ${gz.angleOfMaxGz.toFixed(1)}°`],
+    ['Angle of vanishing stability', gz.vanishingAngle === null ? 'beyond the curve worked' : `${gz.vanishingAngle.toFixed(1)}°`],
+  ];
+  if (floated !== null) {
+    pairs.unshift(['Floats at', `draft aft ${cell(floated.draftAft, 'm')} m, forward ${cell(floated.draftFwd, 'm')} m, trim ${cell(floated.trim, 'm')} m by the ${floated.trim >= 0 ? 'stern' : 'head'}`]);
+  }
+  facts($('loading-results'), pairs);
+  const headRow = document.createElement('tr');
+  for (const label of ['Criterion', 'Required', 'Found', 'Verdict']) {
+    const th = document.createElement('th');
+    th.scope = 'col';
+    th.textContent = label;
+    headRow.append(th);
+  }
+  $('criteria-table').tHead.replaceChildren(headRow);
+  $('criteria-table').tBodies[0].replaceChildren(...gz.criteria.map((c) => {
+    const tr = document.createElement('tr');
+    tr.dataset.criterion = c.id;
+    const name = document.createElement('th');
+    name.scope = 'row';
+    name.textContent = CRITERION_NAMES[c.id] ?? c.id;
+    const u = UNIT_TEXT[c.unit] ?? c.unit;
+    const sep = u === '°' ? '' : ' ';
+    const req = document.createElement('td');
+    req.textContent = `at least ${c.required}${sep}${u}`;
+    const act = document.createElement('td');
+    act.textContent = `${Number(c.actual.toPrecision(4))}${sep}${u}`;
+    const verdict = document.createElement('td');
+    verdict.className = c.pass ? 'pass' : 'fail';
+    verdict.textContent = c.pass ? 'pass' : 'FAIL';
+    tr.append(name, req, act, verdict);
+    return tr;
+  }));
+  $('criteria-caption').textContent = `Intact-stability criteria: ${gz.criteriaSet.name} (${gz.criteriaSet.source})`;
+  $('criteria-notes').replaceChildren(list(gz.notes ?? [], 'notes'));
+  showSvg('gz-figure', await ask('gz', q, { svg: true }));
+}
+
+function crossQuery() {
+  return {
+    displacements: `${$('cross-from').value.trim()}:${$('cross-step').value.trim()}:${$('cross-to').value.trim()}`,
+    heels: $('cross-heels').value.trim(),
+    trim: $('cross-free').checked ? 'free' : 'level',
+    density: $('density').value.trim(),
+  };
+}
+
+async function showCrossCurves() {
+  $('cross-problem').textContent = '';
+  try {
+    showSvg('cross-figure', await ask('cross-curves', crossQuery(), { svg: true }));
+  } catch (e) {
+    $('cross-figure').replaceChildren();
+    $('cross-problem').textContent = e.message;
+  }
+}
+
 async function guarded(fn) {
   try {
     await fn();
@@ -326,6 +458,16 @@ function wire() {
     ev.preventDefault();
     guarded(showSheet);
   });
+  $('loading-form').addEventListener('submit', (ev) => {
+    ev.preventDefault();
+    guarded(showLoading);
+  });
+  $('cross-form').addEventListener('submit', (ev) => {
+    ev.preventDefault();
+    guarded(showCrossCurves);
+  });
+  $('download-gz-csv').addEventListener('click', () => guarded(async () => saveText(`${baseName()}-gz.csv`, await ask('gz', loadingQuery(), { csv: true }), 'text/csv')));
+  $('download-cross-csv').addEventListener('click', () => guarded(async () => saveText(`${baseName()}-cross-curves.csv`, await ask('cross-curves', crossQuery(), { csv: true }), 'text/csv')));
   $('download-hydro-csv').addEventListener('click', () => guarded(async () => saveText(`${baseName()}-hydrostatics.csv`, await ask('hydrostatics', draftsQuery(), { csv: true }), 'text/csv')));
   $('download-bonjean-csv').addEventListener('click', () => guarded(async () => saveText(`${baseName()}-bonjean.csv`, await ask('bonjean', {}, { csv: true }), 'text/csv')));
   $('download-sheet-csv').addEventListener('click', () => guarded(async () => saveText(`${baseName()}-sheet.csv`, await ask('sheet', { draft: $('sheet-draft').value.trim(), density: $('density').value.trim() }, { csv: true }), 'text/csv')));

@@ -226,6 +226,38 @@ describe('the page in a browser', () => {
     await page.close();
   });
 
+  test('a loading: the verdicts and the floating position shown are the API\'s, the GZ curve and cross curves are drawn', async () => {
+    const page = await openPage(1280, 900, '?hull=demo-survey-launch');
+    await expect.poll(() => page.locator('#cross-figure svg title').count(), { timeout: 20_000 }).toBe(1);
+    const displacement = await page.inputValue('#load-displacement');
+    expect(Number(displacement)).toBeGreaterThan(0);
+    await page.fill('#load-kg', '0.9');
+    await page.fill('#load-lcg', '3.3');
+    await page.fill('#load-fsm', '0.2');
+    await page.click('#check-loading');
+    await expect.poll(() => page.locator('#gz-figure svg title').count(), { timeout: 20_000 }).toBe(1);
+    const query = `displacement=${displacement}&kg=0.9&fsm=0.2&trim=free&density=1.025`;
+    const api = (await (await fetch(`${base}/v1/hulls/demo-survey-launch/gz?${query}`)).json()) as { gm0: number; criteria: { id: string; actual: number; pass: boolean }[] };
+    const rows = page.locator('#criteria-table tbody tr');
+    expect(await rows.count()).toBe(api.criteria.length);
+    for (const [k, c] of api.criteria.entries()) {
+      const row = rows.nth(k);
+      expect(await row.getAttribute('data-criterion')).toBe(c.id);
+      expect(await row.locator('td').nth(1).textContent()).toContain(String(Number(c.actual.toPrecision(4))));
+      expect(await row.locator('td').nth(2).textContent()).toBe(c.pass ? 'pass' : 'FAIL');
+    }
+    expect(await page.locator('#loading-results').textContent()).toContain(`${api.gm0.toFixed(3)} m`);
+    const floated = (await (await fetch(`${base}/v1/hulls/demo-survey-launch/float?displacement=${displacement}&lcg=3.3&kg=0.9`)).json()) as { draftAft: number };
+    expect(await page.locator('#loading-results').textContent()).toContain(`draft aft ${floated.draftAft.toFixed(3)} m`);
+    // The caveats of the verdicts are shown with them.
+    expect(await page.locator('#criteria-notes').textContent()).toMatch(/weather\) criterion .* is not checked/);
+    await page.locator('#loading-section').screenshot({ path: join(ARTEFACTS, 'page-1280-stability.png') });
+    // The GZ curve downloaded as CSV is the API's.
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#download-gz-csv')]);
+    expect(readFileSync((await download.path())!, 'utf8')).toBe(await (await fetch(`${base}/v1/hulls/demo-survey-launch/gz?${query}&format=csv`)).text());
+    await page.close();
+  });
+
   test('at 390 px only the tables and plots scroll sideways, in their own boxes', async () => {
     const page = await openPage(390, 844);
     const overflow = await page.evaluate(() => document.scrollingElement!.scrollWidth);
