@@ -30,7 +30,10 @@ import { fileURLToPath } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { prepareHull } from '../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../core/offsets/readOffsets.js';
-import { hydrostaticResult } from '../core/report/formatHydrostatics.js';
+import { writeAnswer } from '../core/report/answerForm.js';
+import { HYDROSTATICS_FORM, hydrostaticResult } from '../core/report/formatHydrostatics.js';
+import { DEFAULT_OUTPUT } from '../core/report/outputOptions.js';
+import { SI_CONVERTER } from '../core/report/unitConversion.js';
 import { hydrostaticTable } from '../core/upright/hydrostatics.js';
 
 interface Histogram {
@@ -97,7 +100,7 @@ function drafts(shift: number): string {
   return Array.from({ length: 20 }, (_, k) => (0.2 + shift + 0.09 * k).toFixed(9)).join(',');
 }
 
-/** Median time, ms, of the 20-draft table of the demo workboat and its JSON text, in this process. */
+/** Median time, ms, of the 20-draft table of the demo workboat and its JSON text (through the shared output step, as the service writes it), in this process. */
 function inProcessTableMs(offsets: string): number {
   const { hull } = readOffsetsCsv(offsets);
   const prepared = prepareHull(hull);
@@ -107,7 +110,7 @@ function inProcessTableMs(offsets: string): number {
     const t0 = performance.now();
     for (let k = 0; k < 100; k++) {
       const d = drafts(++shift * 1e-9).split(',').map(Number);
-      JSON.stringify(hydrostaticResult(hull, 1.025, hydrostaticTable(prepared, d, 1.025)));
+      writeAnswer(HYDROSTATICS_FORM, hydrostaticResult(hull, 1.025, hydrostaticTable(prepared, d, 1.025)), 'json', DEFAULT_OUTPUT, SI_CONVERTER);
     }
     times.push((performance.now() - t0) / 100);
   }

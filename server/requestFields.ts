@@ -150,15 +150,22 @@ export const IMPERIAL_FORMS: ReadonlyMap<z.ZodType, z.ZodType> = new Map<z.ZodTy
 ]);
 
 /** A request schema with its length fields read in the unit system (feet for imperial). */
-export function inUnitSystem(schema: z.ZodObject, system: UnitSystem): z.ZodObject {
+export function inUnitSystem<S extends z.ZodObject>(schema: S, system: UnitSystem): S {
   if (system === 'si') return schema;
+  const kept = inFeet.get(schema);
+  if (kept !== undefined) return kept as S;
   const swaps: Record<string, z.ZodType> = {};
   for (const [k, v] of Object.entries(schema.shape)) {
     const imperial = IMPERIAL_FORMS.get(v as z.ZodType);
     if (imperial !== undefined) swaps[k] = imperial;
   }
-  return Object.keys(swaps).length === 0 ? schema : schema.extend(swaps);
+  const made = Object.keys(swaps).length === 0 ? schema : (schema.extend(swaps) as unknown as S);
+  inFeet.set(schema, made);
+  return made;
 }
+
+/** Each schema's feet form, made once (building a zod object per request would cost more than the request). */
+const inFeet = new WeakMap<z.ZodObject, z.ZodObject>();
 
 const DENSITY_TEXT = `water density, t/m3, ${DENSITY_RANGE.min} to ${DENSITY_RANGE.max} (default ${SEA_WATER_DENSITY}, sea water)`;
 

@@ -1,8 +1,10 @@
 /**
  * What `npm start` shows a person at the terminal once the service listens: the
  * hydrostatic table of the first demo hull over a working range of drafts, and the URLs
- * of every demo hull's table (CSV for a spreadsheet's web query). Written to stderr so
- * the JSON request log on stdout stays machine-readable.
+ * of every demo hull's table (CSV for a spreadsheet's web query, with a plain header, and
+ * one figure for a cell). Written to stderr, and only when stderr is a terminal (or
+ * HALFBREADTH_BANNER=1; server/main.ts), so the JSON request log on stdout stays
+ * machine-readable.
  */
 import { hydrostaticResult, hydrostaticsText } from '../core/report/formatHydrostatics.js';
 import { hydrostaticTable } from '../core/upright/hydrostatics.js';
@@ -40,6 +42,8 @@ export function startBanner(store: HullStore, ids: readonly string[], baseUrl: s
       `${hull.name}`,
       `  table (JSON):  ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}`,
       `  table (CSV):   ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}&format=csv`,
+      `  web query:     ${baseUrl}/v1/hulls/${id}/hydrostatics?${query}&fields=draft,displacement,kmt,tpc&format=csv&header=plain`,
+      `  one figure:    ${baseUrl}/v1/hulls/${id}/hydrostatics/displacement?draft=${mid}`,
       `  sheet:         ${baseUrl}/v1/hulls/${id}/sheet?draft=${mid}`,
       `  Bonjean:       ${baseUrl}/v1/hulls/${id}/bonjean`,
       `  areas:         ${baseUrl}/v1/hulls/${id}/areas?draft=${mid}`,

@@ -39,7 +39,7 @@ Options:
 Forms:
   table   one line per station with a bar for its area; the LCB is marked
           between the stations it lies between
-  csv     x_m, area_m2, fraction_of_am; leading # lines give the caution,
+  csv     x_m, area_m2, fraction; leading # lines give the caution,
           the datum of x, volume, LCB, Am, LWL and Cp
   json    { "hull", "caution", "draft", "stations": [ { "x", "area",
           "fraction" } ], "volume", "lcb", "am", "amidships", "lwl", "cp" }

@@ -81,7 +81,8 @@ export function readMetadata(comments: readonly CommentLine[], options: Metadata
       issues.push(csvIssue('HYD_METADATA_VALUE', c.line, undefined, undefined, `${m.key} is given twice (first on line ${before.line})`));
       continue;
     }
-    given.set(m.key, { line: c.line, value: m.value });
+    // A units, ap or fp value holds no delimiter: any a spreadsheet left after it is padding.
+    given.set(m.key, { line: c.line, value: m.key === 'name' ? m.value : m.value.replace(/[\s,;]+$/, '') });
   }
 
   let units: LengthUnit | undefined = options.fallbackUnits ?? 'm';

@@ -94,11 +94,11 @@ function isComment(s: string): boolean {
   return s.charCodeAt(q + 1) === HASH;
 }
 
-/** A line of nothing but delimiters and spaces: an empty row as a spreadsheet writes it. */
-function isEmptyRow(s: string, delimiter: string): boolean {
+/** A line of nothing but delimiters and spaces: an empty row as a spreadsheet writes it, no more a row than a blank line. */
+function isEmptyRow(s: string): boolean {
   for (let i = 0; i < s.length; i++) {
     const ch = s[i]!;
-    if (ch !== ' ' && ch !== '\t' && ch !== delimiter) return false;
+    if (ch !== ' ' && ch !== '\t' && ch !== ',' && ch !== ';') return false;
   }
   return true;
 }
@@ -138,8 +138,7 @@ function sortLines(text: string): Lines {
   let headerLine = 0;
   for (let k = 0; k < all.length; k++) {
     const s = all[k]!;
-    const c = firstNonSpace(s);
-    if (c === -1) continue;
+    if (isEmptyRow(s)) continue;
     if (isComment(s)) (header === undefined ? before : after).push({ line: k + 1, text: s });
     else if (header === undefined) {
       header = s;
@@ -215,15 +214,7 @@ export function readOffsetsCsv(text: string, options: ReadOptions = {}): ReadRes
   // The table's width as a spreadsheet wrote it: the header's cells, blank ones at its end included.
   const width = sorted.header === undefined ? 1 : (Papa.parse<string[]>(sorted.header, { delimiter, preview: 1 }).data[0]?.length ?? 1);
   const tidy = (c: CommentLine): CommentLine => ({ line: c.line, text: commentText(c.text, delimiter, width) });
-  // Rows of nothing but delimiters are empty rows of a spreadsheet, as blank lines are.
-  const kept = sorted.body.map((_, k) => k).filter((k) => !isEmptyRow(sorted.body[k]!, delimiter));
-  const lines = {
-    ...sorted,
-    before: sorted.before.map(tidy),
-    after: sorted.after.map(tidy),
-    body: kept.map((k) => sorted.body[k]!),
-    bodyLines: kept.map((k) => sorted.bodyLines[k]!),
-  };
+  const lines = { ...sorted, before: sorted.before.map(tidy), after: sorted.after.map(tidy) };
   const issues: Issue[] = [];
   if (lines.header === undefined) {
     const meta = readMetadata(lines.before);

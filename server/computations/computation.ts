@@ -67,7 +67,19 @@ const OffsetsRequired = z.custom<unknown>((v) => v !== undefined, { error: 'offs
  * its own parameters (lengths in the unit system asked for) with the shared answer
  * fields (answerQuery.ts).
  */
-export function requestSchemas(c: AnyComputation, units: UnitSystem = 'si') {
+export function requestSchemas(c: AnyComputation, units: UnitSystem = 'si'): RequestSchemas {
+  // Made once per computation and unit system: a zod object built per request costs more than the answer it validates.
+  const kept = madeSchemas.get(c)?.[units];
+  if (kept !== undefined) return kept;
+  const made = makeSchemas(c, units);
+  madeSchemas.set(c, { ...madeSchemas.get(c), [units]: made });
+  return made;
+}
+
+type RequestSchemas = ReturnType<typeof makeSchemas>;
+const madeSchemas = new WeakMap<AnyComputation, Partial<Record<UnitSystem, RequestSchemas>>>();
+
+function makeSchemas(c: AnyComputation, units: UnitSystem) {
   const query = inUnitSystem(c.query, units).extend(ANSWER_QUERY).strict();
   return {
     /** Query of a stored hull's GET. */

@@ -1,7 +1,7 @@
 /**
  * A computed value as the command line and the service write it: rounded to 12
  * significant digits (the documented default of `--digits` and `digits=`; README,
- * "Clean numbers"), which JavaScript then writes in its shortest form. Written here
+ * "Command line"), which JavaScript then writes in its shortest form. Written here
  * from that rule with toPrecision, not through the project's own rounding, so a test
  * that compares an answer with core's figures through it checks the rule too.
  */
