@@ -52,7 +52,10 @@ export function emptyValues(): SectionValues {
 }
 
 const KIND_Z = 1; // the piece is y(z): its parameter is z itself
-const QUAD_SUBDIVISIONS = 2; // for the arc length of whole pieces, computed once per hull
+// Gauss-Legendre panels per piece for the arc length (the one integrand not a polynomial):
+// the same for a whole piece and for the part below a draft, so that the girth and the
+// wetted surface run on continuously as a draft crosses a tabulated waterline or a deck.
+const QUAD_SUBDIVISIONS = 2;
 
 function horner(c: Float64Array, o: number, u: number): number {
   return c[o]! + u * (c[o + 1]! + u * (c[o + 2]! + u * c[o + 3]!));
@@ -439,7 +442,7 @@ export class Section {
     } else {
       const i = this.pieceAt(draft);
       const u = this.solveU(i, draft);
-      this.partial(i, u, out);
+      this.partial(i, u, out, QUAD_SUBDIVISIONS);
       area = this.cumArea[i]! + out.area;
       mz = this.cumMz[i]! + out.momentZ;
       my = this.cumMy[i]! + out.momentYHalf;

@@ -115,6 +115,20 @@ describe('half-breadth and integrals of a smooth section', () => {
       expect(v.wettedGirth, 'with no slope factors set, the wetted girth is the girth').toBeRelClose(v.girth, 1e-15);
     }
   });
+
+  test('the girth runs on without a step as a draft crosses a tabulated height or reaches the deck edge', () => {
+    // Arc length is a continuous function of the draft (elementary calculus); a step at
+    // a point would be a quadrature taken one way below it and another way above.
+    // A steep, strongly curved section, where a step would show most: y = 2 sqrt(z).
+    const z = [0, 0.05, 0.14, 0.19, 0.24];
+    const s = new Section(z.map((zk) => ({ y: 2 * Math.sqrt(zk), z: zk })));
+    for (const zk of z.slice(1)) {
+      const below = s.evaluate(zk * (1 - 1e-13)).girth;
+      const at = s.evaluate(zk).girth;
+      expect(below, `just under z = ${zk}`).toBeRelClose(at, 1e-11);
+      if (zk < z[z.length - 1]!) expect(s.evaluate(zk * (1 + 1e-13)).girth, `just over z = ${zk}`).toBeRelClose(at, 1e-11);
+    }
+  });
 });
 
 describe('corners, flats and closures', () => {
