@@ -9,12 +9,14 @@
  *   c. the same at 201 x 81 and at 401 x 161, so that growth with size shows
  *   d. the command line end to end on the demo workboat (a child process each run)
  *   e. stability on the 101 x 41 hull: the table at a trim, the floating position of a
- *      load, cross curves (5 displacements x 19 heels, level and free to trim) and a GZ
- *      curve read against the criteria
+ *      load, cross curves (20 displacements x 19 heels, level and free to trim) and a GZ
+ *      curve read against the criteria, each with its target
  *
- * The hulls of a to c are made here from a smooth formula (not a drawing): a plan
- * shape 1 - 0.8 xi^4 along the length times a section shape that rises from a quarter
- * of the half-breadth at the keel to the whole at the deck.
+ * The hulls are made here from a smooth formula (not a drawing): a plan shape
+ * 1 - 0.8 xi^4 along the length times a section shape that rises from a quarter of the
+ * half-breadth at the keel to the whole at the deck. For e the plan is skewed by
+ * (1 + 0.2 xi), fuller forward, so that the hull trims as it heels and free trim has
+ * work to do (a hull symmetric fore and aft heels without trimming).
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
@@ -33,22 +35,22 @@ const LENGTH = 20; // m
 const BEAM = 6; // m
 const DEPTH = 3; // m
 
-/** The half-breadth of the formula hull, m. */
-function halfBreadth(x: number, z: number): number {
+/** The half-breadth of the formula hull, m; `skew` makes one end fuller than the other. */
+function halfBreadth(x: number, z: number, skew: number): number {
   const xi = (2 * x) / LENGTH - 1;
   const zeta = z / DEPTH;
-  const plan = 1 - 0.8 * xi ** 4;
+  const plan = (1 - 0.8 * xi ** 4) * (1 + skew * xi);
   const section = 0.25 + 0.75 * (1 - (1 - zeta) ** 3);
   return (BEAM / 2) * plan * section;
 }
 
 /** The formula hull as grid CSV text: `stations` rows by `waterlines` columns, offsets to the millimetre. */
-export function gridCsv(stations: number, waterlines: number): string {
+export function gridCsv(stations: number, waterlines: number, skew = 0): string {
   const zs = Array.from({ length: waterlines }, (_, k) => (DEPTH * k) / (waterlines - 1));
   const lines = ['# name: bench hull (formula)', '# units: m', ['x', ...zs.map((z) => z.toFixed(4))].join(',')];
   for (let i = 0; i < stations; i++) {
     const x = (LENGTH * i) / (stations - 1);
-    lines.push([x.toFixed(4), ...zs.map((z) => halfBreadth(x, z).toFixed(3))].join(','));
+    lines.push([x.toFixed(4), ...zs.map((z) => halfBreadth(x, z, skew).toFixed(3))].join(','));
   }
   return lines.join('\n') + '\n';
 }
@@ -125,9 +127,9 @@ const RHO = 1.025;
 
 function stabilityLines(stations: number, waterlines: number): Line[] {
   const size = `${stations} x ${waterlines}`;
-  const prepared = prepareHull(readOffsetsCsv(gridCsv(stations, waterlines)).hull);
+  const prepared = prepareHull(readOffsetsCsv(gridCsv(stations, waterlines, 0.2)).hull);
   const at = (d: number): number => hydrostaticsAt(prepared, d, RHO).displacement;
-  const displacements = [0.6, 0.9, 1.2, 1.5, 1.8].map(at);
+  const displacements = Array.from({ length: 20 }, (_, k) => at(0.3 + 0.09 * k));
   const heels = Array.from({ length: 19 }, (_, k) => 5 * k);
   const design = hydrostaticsAt(prepared, 1.5, RHO);
   const trimmedDrafts = drafts(TABLE_DRAFTS).map((d) => 0.4 + 0.5 * d);
@@ -137,13 +139,15 @@ function stabilityLines(stations: number, waterlines: number): Line[] {
       what: 'e. floating position, LCG 0.3 m aft of LCB',
       size,
       t: measure(() => floatingPosition(prepared, { displacement: design.displacement, lcg: design.lcb - 0.3 }, RHO)),
+      target: 5,
     },
-    { what: 'e. cross curves 5 x 19, level trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'level'), 5, 400, 200) },
-    { what: 'e. cross curves 5 x 19, free trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'free'), 5, 400, 200) },
+    { what: 'e. cross curves 20 x 19, level trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'level'), 5, 400, 200), target: 150 },
+    { what: 'e. cross curves 20 x 19, free trim', size, t: measure(() => crossCurves(prepared, displacements, heels, RHO, 'free'), 5, 400, 200), target: 1500 },
     {
       what: 'e. GZ curve and criteria, KG 2 m',
       size,
       t: measure(() => rightingLevers(prepared, { displacement: design.displacement, kg: 2 }, RHO)),
+      target: 30,
     },
   ];
 }

@@ -97,8 +97,9 @@ describe('half-breadth and integrals of a smooth section', () => {
   test('the girth of a parabolic section matches the arc length of the parabola', () => {
     // y = a z^2 from the keel: half girth = int sqrt(1 + (2 a z)^2) dz (plus no flat,
     // since y = 0 at the keel). The arc length of a piece is five-point Gauss-Legendre
-    // (not exact for a square root): on this smooth arc it comes within about 1e-11, so
-    // 1e-9 relative is the quadrature's error with a margin, and nothing looser.
+    // on one panel per piece (not exact for a square root): on this arc it comes within
+    // about 1.5e-9, so 1e-8 relative is the quadrature's error with a margin, and nothing
+    // looser (a millimetre in a hundred kilometres of girth).
     const a = 0.8;
     const arc = (zz: number): number => {
       const u = 2 * a * zz;
@@ -111,7 +112,7 @@ describe('half-breadth and integrals of a smooth section', () => {
     const s = new Section(z.map((zk) => ({ y: a * zk * zk, z: zk })));
     for (const d of [0.5, 1, 1.5, 0.3, 1.1]) {
       const v = s.evaluate(d);
-      expect(v.girth, `girth to ${d}`).toBeRelClose(2 * arc(d), 1e-9);
+      expect(v.girth, `girth to ${d}`).toBeRelClose(2 * arc(d), 1e-8);
       expect(v.wettedGirth, 'with no slope factors set, the wetted girth is the girth').toBeRelClose(v.girth, 1e-15);
     }
   });
