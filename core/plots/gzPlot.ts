@@ -94,11 +94,16 @@ export function gzPlot(d: GzPlotData): string {
   if (vanishing !== null && Number.isFinite(vanishing)) {
     const vx = f.sx(vanishing);
     marks.push(el('path', { d: `M${vx},${y0}l-5,9h10z`, fill: INK.text, 'data-role': 'vanishing' }));
-    marks.push(text(vx - 6, y0 - 8, `vanishing ${short(vanishing)}°`, { 'text-anchor': 'end', 'font-size': 11, fill: INK.text }));
+    // Under the mark, clear of the curve (which crosses the zero line there) and of a
+    // downflooding line just before it; kept inside the figure near its right edge.
+    marks.push(text(Math.min(vx, W - 44), y0 + 24, `vanishing ${short(vanishing)}°`, { 'text-anchor': 'middle', 'font-size': 11, fill: INK.text }));
   }
   if (df !== null && Number.isFinite(df)) {
     marks.push(el('line', { x1: f.sx(df), x2: f.sx(df), y1: f.bottom, y2: f.top, stroke: '#0072B2', 'stroke-width': 1.8, 'stroke-dasharray': '3 3', 'data-role': 'downflooding' }));
-    marks.push(text(f.sx(df) + 5, f.top + 14, `downflooding ${short(df)}°`, { 'font-size': 11.5, fill: '#0072B2', 'font-weight': 600 }));
+    // Beside the line on the side with room: to the left in the right half of the plot, so
+    // the words stay inside the figure.
+    const leftOfLine = f.sx(df) > (f.left + f.right) / 2;
+    marks.push(text(f.sx(df) + (leftOfLine ? -5 : 5), f.top + 14, `downflooding ${short(df)}°`, { 'text-anchor': leftOfLine ? 'end' : 'start', 'font-size': 11.5, fill: '#0072B2', 'font-weight': 600 }));
   }
   // The criteria: one line each, verdict in words and in colour, then the overall verdict.
   const rows: string[] = [];

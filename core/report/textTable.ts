@@ -41,7 +41,9 @@ export function textCell(value: number, unit: string): string {
   if (!Number.isFinite(value)) return '-';
   const fixed = value.toFixed(TEXT_DECIMALS[unit] ?? 3);
   if (value === 0 || significantOf(fixed) >= TEXT_SIGNIFICANT || Math.abs(value) >= 1) return fixed;
-  return String(Number(value.toPrecision(TEXT_SIGNIFICANT)));
+  // Trailing zeros kept (0.0500, not 0.05): they are significant, and a column reads evenly.
+  const precise = value.toPrecision(TEXT_SIGNIFICANT);
+  return precise.includes('e') ? String(Number(precise)) : precise;
 }
 
 export interface TextColumn {
