@@ -1,20 +1,14 @@
 /**
  * Heavy work off the request thread (the response-time bound while it runs is in
- * freeLoop.test.ts): a small table stays on the request thread (no thread is even started); the answers are the same wherever the work
- * ran; and a computation past its time limit is stopped with a problem document.
+ * freeLoop.test.ts): a small table stays on the request thread (no thread is even
+ * started); the answers are the same wherever the work ran; and a computation past its
+ * time limit is stopped with a problem document.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, test } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { describe, expect, test } from 'vitest';
 import { buildApp } from '../../server/app.js';
-import { startService } from '../fixtures/serviceProcess.js';
 import { csvHeaders, expectProblem } from '../fixtures/serverHelpers.js';
 import { largeGrid } from '../fixtures/largeGrid.js';
-import { readFileSync } from 'node:fs';
-
-const dirs: string[] = [];
-afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));
 
 const workboat = readFileSync(new URL('../../offsets-demo/workboat.csv', import.meta.url), 'utf8');
 
