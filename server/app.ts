@@ -63,7 +63,17 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   });
   const cache = new PreparedCache(store, limits.preparedCacheSize);
   const pool = new ComputePool(limits);
-  const ctx: ServiceContext = { store, cache, answers: new AnswerCache(limits.answerCacheChars), pool, limits, openapi: buildOpenapi(ALL_ROUTES) };
+  // The OpenAPI document is made when first asked for: about a third of building the app,
+  // which every start (and every test's app) would otherwise pay for a page few open.
+  let openapi: ReturnType<typeof buildOpenapi> | undefined;
+  const ctx: ServiceContext = {
+    store,
+    cache,
+    answers: new AnswerCache(limits.answerCacheChars),
+    pool,
+    limits,
+    openapi: () => (openapi ??= buildOpenapi(ALL_ROUTES)),
+  };
 
   registerProblemHandler(app);
   registerUploadBody(app);

@@ -14,6 +14,6 @@ export interface ServiceContext {
   readonly pool: ComputePool;
   /** The limits in force: SERVICE_LIMITS, or a test's smaller ones. */
   readonly limits: ServiceLimits;
-  /** The OpenAPI document of the service (server/openapi.ts), built once. */
-  readonly openapi: Readonly<Record<string, unknown>>;
+  /** The OpenAPI document of the service (server/openapi.ts), built on first use and kept. */
+  readonly openapi: () => Readonly<Record<string, unknown>>;
 }

@@ -37,7 +37,7 @@ export const SERVICE_ROUTES: readonly RouteSpec[] = [
     description: 'The same document as openapi/openapi.json in the repository.',
     responses: { 200: { description: 'the OpenAPI document', other: { mediaType: 'application/json', description: 'OpenAPI 3.1' } } },
     problems: [],
-    handler: (_req, reply, ctx) => reply.type(JSON_MEDIA_TYPE).send(JSON.stringify(ctx.openapi)),
+    handler: (_req, reply, ctx) => reply.type(JSON_MEDIA_TYPE).send(JSON.stringify(ctx.openapi())),
   },
   {
     method: 'GET',
@@ -49,7 +49,8 @@ export const SERVICE_ROUTES: readonly RouteSpec[] = [
     responses: { 200: { description: 'the page', other: { mediaType: 'text/html', description: 'HTML' } } },
     problems: [],
     handler: (_req, reply, ctx) => {
-      if (docsCache?.doc !== ctx.openapi) docsCache = { doc: ctx.openapi, html: docsHtml(ctx.openapi) };
+      const doc = ctx.openapi();
+      if (docsCache?.doc !== doc) docsCache = { doc, html: docsHtml(doc) };
       return reply.type(HTML).header('content-security-policy', PAGE_POLICY).send(docsCache.html);
     },
   },

@@ -135,7 +135,7 @@ describe('the service process', () => {
     });
   }
 
-  test('loads the demo hulls once, logs one JSON line per request, and stops cleanly on SIGTERM with a request in flight', async () => {
+  test('loads the demo hulls once, logs one JSON line per request, stops cleanly on SIGTERM with a request in flight, and at once with an idle keep-alive connection', async () => {
     const dataDir = tempDir();
     const first = await start(dataDir);
     const list1 = (await (await fetch(`${first.base}/v1/hulls`)).json()) as { hulls: { id: string }[] };
@@ -184,15 +184,13 @@ describe('the service process', () => {
     const list2 = (await (await fetch(`${second.base}/v1/hulls`)).json()) as { hulls: { id: string }[] };
     expect(list2.hulls.map((h) => h.id).sort()).toEqual(['demo-survey-launch', 'demo-workboat', 'demo-workboat-ftin']);
     expect(second.lines.filter((l) => (l.demo as { outcome?: string } | undefined)?.outcome === 'present')).toHaveLength(3);
-    second.child.kill('SIGINT');
-    expect(await second.exited).toBe(0);
-  });
 
-  test('exits within a second of SIGTERM while a keep-alive client holds an idle connection', async () => {
-    const running = await start(tempDir());
+    // A keep-alive client's idle connection does not hold the service up: it exits within
+    // a second of the signal (SIGINT here, the same stop as SIGTERM), not after the
+    // keep-alive timeout (a bound on a defect, not a benchmark).
     const agent = new Agent({ keepAlive: true, keepAliveMsecs: 60_000 });
     const status = await new Promise<number>((resolve, reject) => {
-      const req = request({ host: '127.0.0.1', port: running.port, path: '/healthz', agent }, (res) => {
+      const req = request({ host: '127.0.0.1', port: second.port, path: '/healthz', agent }, (res) => {
         res.resume();
         res.on('end', () => resolve(res.statusCode ?? 0));
       });
@@ -203,8 +201,8 @@ describe('the service process', () => {
     // The answer left the socket open and idle in the agent's pool.
     expect(Object.values(agent.freeSockets).flat()).toHaveLength(1);
     const signalled = Date.now();
-    running.child.kill('SIGTERM');
-    expect(await running.exited).toBe(0);
+    second.child.kill('SIGINT');
+    expect(await second.exited).toBe(0);
     expect(Date.now() - signalled).toBeLessThan(1000);
     agent.destroy();
   });
