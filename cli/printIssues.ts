@@ -9,16 +9,35 @@
 import type { Issue } from '../core/common/errors.js';
 import { terminalSafe, type TextSink } from './io.js';
 
-/** Path roots that belong to a command-line option rather than to the input file. */
-const OPTION_ROOTS: Readonly<Record<string, string>> = { drafts: '--drafts', draft: '--draft', density: '--density' };
+/**
+ * Path roots that belong to a command-line option rather than to the input file: the
+ * core names a value by its field (a load's `displacement`, the `openings` of a GZ
+ * curve), and the line names the option that gave it.
+ */
+const OPTION_ROOTS: Readonly<Record<string, string>> = {
+  drafts: '--drafts',
+  draft: '--draft',
+  density: '--density',
+  displacement: '--displacement',
+  displacements: '--displacements',
+  heels: '--heels',
+  kg: '--kg',
+  openings: '--opening',
+};
 
-/** What an issue is about, as printed before it. */
+/**
+ * What an issue is about, as printed before it. An issue at an option (`--heels`) is led
+ * by the program when its message names the option, and by the option when it does not
+ * (`--heels: heel 200 degrees is outside -180 to 180 degrees`), so every line says which
+ * option broke which rule.
+ */
 export function issueSource(i: Issue, fileLabel: string | undefined, program: string): string {
   const root = i.path[0];
   if (typeof root === 'string') {
     const option = OPTION_ROOTS[root];
     if (option !== undefined) return option;
-    if (root.startsWith('--') || root === 'argv') return program;
+    if (root.startsWith('--')) return i.message.includes(root) ? program : root;
+    if (root === 'argv') return program;
   }
   return fileLabel ?? program;
 }

@@ -77,7 +77,13 @@ export async function criteriaOption(values: CommandArgs['values'], io: CliIo): 
   } catch (e) {
     fail('HYD_CRITERIA', ['--criteria'], `--criteria ${path.slice(0, 200)} is not JSON: ${(e as Error).message}`);
   }
-  return readCriteriaSet(json, ['criteria']);
+  // The set's own faults, said as the option and the file that gave them.
+  try {
+    return readCriteriaSet(json, ['criteria']);
+  } catch (e) {
+    if (!(e instanceof HalfbreadthError)) throw e;
+    throw new HalfbreadthError(e.issues.map((i) => ({ ...i, path: ['--criteria', ...i.path.slice(1)], message: `--criteria ${path.slice(0, 200)}: ${i.message}` })));
+  }
 }
 
 /** The deck edges a read offsets file leaves unsaid (heeled work refuses them). */

@@ -3,7 +3,7 @@
  * load (drafts at the perpendiculars, trim and heel), as a text table, CSV or JSON. Thin:
  * the balance is core/stability/floatingPosition.ts's, the forms core/report's.
  */
-import type { Issue } from '../../core/common/errors.js';
+import { issue, type Issue } from '../../core/common/errors.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { FLOAT_FORM, floatResult } from '../../core/report/formatStability.js';
 import { floatingPosition } from '../../core/stability/floatingPosition.js';
@@ -77,6 +77,10 @@ Example:
     const lcg = attempt(() => lengthOption(values, 'lcg', system), issues);
     const tcg = attempt(() => lengthOption(values, 'tcg', system), issues);
     const kg = attempt(() => lengthOption(values, 'kg', system), issues);
+    // Said here, with the other options' problems, before the file is read: the rule is core's (floatingPosition).
+    if (tcg !== undefined && tcg !== 0 && values['kg'] === undefined) {
+      issues.push(issue('HYD_BAD_ARGUMENT', ['--tcg'], '--tcg needs --kg: a TCG heels the hull by an amount that depends on the height of G'));
+    }
     const density = attempt(() => densityOption(values), issues);
     const input = await attemptAsync(() => readInput(args.positionals[0]!, io), issues);
     const read = input === undefined ? undefined : attempt(() => readOffsetsOf(input, choice), issues);

@@ -88,7 +88,9 @@ Examples:
     const drafts = values['drafts'] === undefined ? undefined : attempt(() => parseDraftList(str(values['drafts']) ?? '', ['drafts']), issues);
     const draft = values['draft'] === undefined ? undefined : attempt(() => singleDraft(str(values['draft'])), issues);
     const density = attempt(() => densityOption(values), issues);
-    const stability = await stabilityChoice(values, io, issues);
+    // The two trim options govern different parts here (--free-trim the cross curves,
+    // --level-trim the GZ curve) and are read below, so both may be given at once.
+    const stability = await stabilityChoice({ ...values, 'free-trim': undefined, 'level-trim': undefined }, io, issues);
     if ((values['displacement'] !== undefined) !== (values['kg'] !== undefined)) {
       issues.push(issue('HYD_BAD_ARGUMENT', [values['kg'] === undefined ? '--kg' : '--displacement'], 'the righting levers need a loading: give --displacement and --kg together'));
     }
