@@ -48,13 +48,17 @@ export const IMO_2008_GENERAL: CriteriaSet = {
 /** A criteria set as a user writes it in JSON. */
 export const CriteriaSetSchema = z
   .object({
-    name: z.string().min(1).max(200).describe('what the set is, as a verdict names it'),
+    name: z
+      .string({ error: 'required: a name for the set, as each verdict names it (text)' })
+      .min(1, { error: 'required: a name for the set, as each verdict names it (text)' })
+      .max(200)
+      .describe('what the set is, as a verdict names it'),
     source: z.string().max(500).default('given by the user').describe('where its numbers come from'),
     criteria: z
       .array(
         z
           .object({
-            id: z.enum(IDS).describe('the kind of criterion'),
+            id: z.enum(IDS, { error: (iss) => `${JSON.stringify(iss.input)} is not a criterion this project knows; the ids are ${IDS.join(', ')}` }).describe('the kind of criterion'),
             required: z.number().describe('the least value it asks for, in its unit (m.rad, m or deg)'),
           })
           .strict(),
@@ -65,20 +69,26 @@ export const CriteriaSetSchema = z
   .strict()
   .describe('a set of intact-stability criteria of the kinds of IMO 2008 IS Code Part A, 2.2, with the numbers of the rule that governs the vessel');
 
+/** A field of the criteria JSON as its author wrote it: criteria[0].id (JSON's own path notation). */
+function fieldText(path: readonly PropertyKey[]): string {
+  if (path.length === 0) return 'text';
+  return path.map((p, k) => (typeof p === 'number' ? `[${p}]` : `${k === 0 ? '' : '.'}${String(p)}`)).join('');
+}
+
 /** A criteria set from its JSON (already parsed); every fault HYD_CRITERIA with its path. */
 export function readCriteriaSet(json: unknown, path: readonly (string | number)[] = ['criteria']): CriteriaSet {
   const r = CriteriaSetSchema.safeParse(json);
   if (!r.success) {
     throw new HalfbreadthError(
-      r.error.issues.map((i) => issue('HYD_CRITERIA', [...path, ...i.path.map((p) => (typeof p === 'symbol' ? String(p) : p))], `criteria${i.path.map((p) => `[${String(p)}]`).join('')}: ${i.message}`)),
+      r.error.issues.map((i) => issue('HYD_CRITERIA', [...path, ...i.path.map((p) => (typeof p === 'symbol' ? String(p) : p))], `the criteria set's ${fieldText(i.path)}: ${i.message}`)),
     );
   }
   const required: Partial<Record<CriterionId, number>> = {};
   const seen = new Set<string>();
   for (const [k, c] of r.data.criteria.entries()) {
-    if (seen.has(c.id)) throw new HalfbreadthError([issue('HYD_CRITERIA', [...path, 'criteria', k, 'id'], `criteria[${k}]: ${c.id} is given twice`)]);
+    if (seen.has(c.id)) throw new HalfbreadthError([issue('HYD_CRITERIA', [...path, 'criteria', k, 'id'], `the criteria set's ${fieldText(['criteria', k, 'id'])}: ${c.id} is given twice`)]);
     seen.add(c.id);
-    if (!Number.isFinite(c.required)) throw new HalfbreadthError([issue('HYD_CRITERIA', [...path, 'criteria', k, 'required'], `criteria[${k}]: the threshold is not a finite number`)]);
+    if (!Number.isFinite(c.required)) throw new HalfbreadthError([issue('HYD_CRITERIA', [...path, 'criteria', k, 'required'], `the criteria set's ${fieldText(['criteria', k, 'required'])}: the threshold is not a finite number`)]);
     required[c.id] = c.required;
   }
   return { name: r.data.name, source: r.data.source, required };
