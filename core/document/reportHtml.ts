@@ -158,6 +158,16 @@ function stabilitySections(name: string, s: ReportStability | undefined): string
     const { displacement, kg, fsm } = g.result;
     const fs = fsm > 0 ? `, free-surface moment ${esc(short(fsm))} t·m` : '';
     parts.push(`<h2>Righting levers at ${esc(short(displacement))} t, KG ${esc(short(kg))} m${fs}</h2>`, figure(gzPlot({ name, result: g.result, displacement, kg })));
+    // The figures read off the curve, and the curve itself as a table: what a checker
+    // compares with a hand calculation or a stability book.
+    const r = g.result;
+    const angle = (a: number | null): string => (a === null ? 'none within the heels worked' : `${short(a)}°`);
+    parts.push(
+      `<p>KG + FSM / displacement ${esc(textCell(r.kgEffective, 'm'))} m; GM0 ${esc(textCell(r.gm0, 'm'))} m; largest GZ ${esc(textCell(r.maxGz, 'm'))} m at ${esc(short(r.angleOfMaxGz))}°; ` +
+        `angle of vanishing stability ${esc(angle(r.vanishingAngle))}; downflooding angle ${esc(angle(r.downfloodingAngle))}; ${r.trim === 'free' ? 'free to trim' : 'at level trim'} as it heels.</p>`,
+    );
+    const area = new Map(r.areas.map((a) => [a.heel, a.area]));
+    parts.push(table(['Heel, °', 'GZ, m', 'Area to heel, m·rad'], r.points.map((q) => [short(q.heel), textCell(q.gz, 'm'), textCell(area.get(q.heel) ?? Number.NaN, 'm.rad')])));
     parts.push(
       `<p>Criteria: ${esc(g.result.criteriaSet.name)} (${esc(g.result.criteriaSet.source)}).</p>`,
       table(['Criterion', 'Verdict'], g.result.criteria.map((c) => [criterionWords(c), c.pass ? 'pass' : 'FAIL'])),

@@ -163,5 +163,13 @@ describe('report with the stability options', () => {
     expectWallSidedCurve(gz);
     // The criteria table says GM0 as the closed form gives it, to four figures.
     expect(r.out).toContain(`initial metacentric height GM0: at least 0.15 m required, ${Number(GM.toPrecision(4))} m found: pass`);
+    // The GZ curve as a table, heel by heel: the wall-sided formula to the millimetre while
+    // the deck edge stays dry (to 25 degrees on this box), and GM0 in the line above it.
+    expect(r.out).toContain(`GM0 ${GM.toFixed(3)} m;`);
+    for (const h of [5, 10, 15, 20, 25]) {
+      const cells = r.out.match(new RegExp(`<tr><td>${h}</td><td>([^<]*)</td><td>([^<]*)</td></tr>`));
+      expect(cells, `the GZ table's row at ${h} degrees`).not.toBeNull();
+      expect(Number(cells![1])).toBeCloseTo(wallSided(h), 3);
+    }
   });
 });
