@@ -43,7 +43,7 @@ export function displacementQuery(system: UnitSystem) {
     .transform((text, ctx) => {
       const v = readDecimal(text.trim());
       if (!Number.isFinite(v)) {
-        ctx.addIssue({ code: 'custom', message: `displacement '${text.slice(0, 40)}' is not one number; ${hint}`, input: text, params: { code: 'HYD_LOAD_OUT_OF_RANGE' } });
+        ctx.addIssue({ code: 'custom', message: `displacement '${text.slice(0, 40)}' is not one number; ${hint}`, input: text, params: { code: 'HYD_BAD_ARGUMENT' } });
         return z.NEVER;
       }
       return v * typedMassFactor(system);

@@ -35,6 +35,7 @@ describe('the corpus of bad requests', () => {
     expect(doc.type).toBe(bad.type);
     expect(doc.errors[0]!.code).toBe(bad.code);
     expect(doc.errors[0]!.path).toEqual(bad.path);
+    if (bad.detail !== undefined) expect(doc.detail).toMatch(bad.detail);
     await expectHealthy(app);
   });
 
