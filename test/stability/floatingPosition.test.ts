@@ -114,3 +114,41 @@ describe('level drafts for displacements', () => {
     expect(codeOf(() => floatingPosition(p, { displacement: 3, lcg: 4, tcg: 0.1 }, rho))).toMatch(/HYD_BAD_ARGUMENT a TCG of 0.1 m heels the hull by an amount that depends on the height of G: give KG/);
   });
 });
+
+describe('a load with no balance within the hull is refused, never answered', () => {
+  // A box 20 m x 6 m x 4 m at draft 1.3 m. Trimmed with its waterline within the ends and
+  // the deck, the immersed side is a trapezium or a triangle, whose centroid lies at least
+  // L/3 from an end (elementary geometry): an LCG nearer an end than that, or beyond it,
+  // has no floating position a table of offsets can give.
+  const L = 20;
+  const p = prepareHull(boxBarge(L, 6, 4, 11, 5));
+  const displacement = rho * L * 6 * 1.3;
+
+  test.each([
+    ['G aft of the hull', { displacement, lcg: -5 }, 'lcg'],
+    ['G at the aft end', { displacement, lcg: 0 }, 'lcg'],
+    ['G 1 m from the fore end', { displacement, lcg: L - 1, kg: 2 }, 'lcg'],
+    ['a TCG of 1e300 m', { displacement, lcg: L / 2, kg: 2, tcg: 1e300 }, 'tcg'],
+    ['a KG of 1e300 m with a TCG', { displacement, lcg: L / 2, kg: 1e300, tcg: 0.5 }, 'tcg'],
+  ] as const)('%s', (_name, load, field) => {
+    expect(codeOf(() => floatingPosition(p, load, rho))).toMatch(/^HYD_LOAD_OUT_OF_RANGE no floating position balances the load \(displacement [\d.]+ t, G at x = .*\): /);
+    let path: unknown;
+    try {
+      floatingPosition(p, load, rho);
+    } catch (e) {
+      if (isHalfbreadthError(e)) path = e.issues[0]!.path;
+    }
+    expect(path).toEqual([field]);
+  });
+
+  test('an LCG just inside the reach of the trapezium still floats, and balances', () => {
+    // LCB of the trapezium with dF = 0.1 m: L (dA + 2 dF) / (3 (dA + dF)), dA = 2T - dF.
+    const T = 1.3;
+    const dF = 0.1;
+    const dA = 2 * T - dF;
+    const lcg = (L * (dA + 2 * dF)) / (3 * (dA + dF));
+    const fp = floatingPosition(p, { displacement, lcg }, rho);
+    expect(fp.draftFwd).toBeRelClose(dF, 1e-6);
+    expect(fp.draftAft).toBeRelClose(dA, 1e-6);
+  });
+});
