@@ -18,7 +18,9 @@ import { isHalfbreadthError } from '../../core/common/errors.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { crossCurves } from '../../core/stability/crossCurves.js';
 import { floatingPosition } from '../../core/stability/floatingPosition.js';
+import { rightingLevers } from '../../core/stability/rightingLevers.js';
 import { inclinedHydrostatics, waterplaneOf } from '../../core/stability/inclinedHydrostatics.js';
 import { draftsForDisplacements } from '../../core/stability/levelDrafts.js';
 import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
@@ -112,6 +114,35 @@ describe('level drafts for displacements', () => {
     expect(codeOf(() => floatingPosition(p, { displacement: 500, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE displacement 500 t is more than the hull can float: wholly immersed to its deck it displaces [\d.]+ t/);
     expect(codeOf(() => floatingPosition(p, { displacement: -1, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE/);
     expect(codeOf(() => floatingPosition(p, { displacement: 3, lcg: 4, tcg: 0.1 }, rho))).toMatch(/HYD_BAD_ARGUMENT a TCG of 0.1 m heels the hull by an amount that depends on the height of G: give KG/);
+  });
+});
+
+describe('a load too light to resolve', () => {
+  // A box 10 m x 4 m x 2 m encloses 80 m3.
+  const p = prepareHull(boxBarge(10, 4, 2, 5, 5));
+  const least = 80 * 1e-9 * rho;
+
+  test('below 1e-9 of what the hull displaces wholly immersed, every stability computation refuses it, naming it', () => {
+    for (const d of [5e-324, 1e-300, 0.99 * least]) {
+      const words = /HYD_LOAD_OUT_OF_RANGE .*too light to float at a draft these offsets resolve: at least 8\.2e-8 t/;
+      expect(codeOf(() => floatingPosition(p, { displacement: d, lcg: 5 }, rho))).toMatch(words);
+      expect(codeOf(() => crossCurves(p, [1, d], [0, 10], rho))).toMatch(words);
+      expect(codeOf(() => rightingLevers(p, { displacement: d, kg: 1 }, rho))).toMatch(words);
+      expect(codeOf(() => draftsForDisplacements(p, [d], rho))).toMatch(words);
+    }
+  });
+
+  test('ten times that floats at the corner of the bilge: KN of the small triangle there (elementary geometry), 0 upright', () => {
+    // Heeled phi, the immersed section is a right triangle at the bilge, legs a along the
+    // bottom and a tan(phi) up the side, of area a^2 tan(phi) / 2 = V / L; its centroid
+    // (B/2 - a/3, a tan(phi) / 3) gives KN = (B/2 - a/3) cos(phi) + (a tan(phi) / 3) sin(phi).
+    const d = 10 * least;
+    const phi = (10 * Math.PI) / 180;
+    const a = Math.sqrt((2 * (d / rho)) / 10 / Math.tan(phi));
+    const [upright, heeled] = crossCurves(p, [d], [0, 10], rho);
+    expect(Math.abs(upright!.kn)).toBeLessThan(1e-7);
+    expect(heeled!.kn).toBeRelClose((2 - a / 3) * Math.cos(phi) + ((a * Math.tan(phi)) / 3) * Math.sin(phi), 1e-6);
+    expect(draftsForDisplacements(p, [d], rho)[0]).toBeRelClose(d / (rho * 40), 1e-6);
   });
 });
 
