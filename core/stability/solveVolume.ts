@@ -83,7 +83,8 @@ export function enclosedVolume(p: PreparedHull): number {
  * waterplane lies within a few millionths of a metre of the keel on a hull of a few metres,
  * where the solvers' steps (1e-13 of the hull's size on the waterplane's offset) no longer
  * resolve it: on a 10 m box KN upright drifts from 0 by 1e-5 m at 1e-12 of the volume and
- * is NaN at 1e-16. No loading of a real hull is within a factor of a million of it.
+ * is NaN at 1e-16. No loading of a real hull is within a factor of a million of it
+ * (common practice, no source).
  */
 export const LEAST_VOLUME_SHARE = 1e-9;
 
