@@ -36,7 +36,7 @@ export function lengthOption(values: CommandArgs['values'], name: string, system
 export function displacementOption(values: CommandArgs['values'], system: UnitSystem): number {
   const text = str(values['displacement']) ?? '';
   const v = readDecimal(text.trim());
-  if (!Number.isFinite(v)) fail('HYD_LOAD_OUT_OF_RANGE', ['--displacement'], `--displacement '${text.slice(0, 40)}' is not one number of ${TYPED_MASS_UNIT[system]}`);
+  if (!Number.isFinite(v)) fail('HYD_BAD_ARGUMENT', ['--displacement'], `--displacement '${text.slice(0, 40)}' is not one number of ${TYPED_MASS_UNIT[system]}`);
   return v * typedMassFactor(system);
 }
 

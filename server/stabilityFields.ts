@@ -12,7 +12,7 @@ import { LIMITS } from '../core/common/limits.js';
 import { readTypedLength, TYPED_LENGTH_HINT, typedLengthFactor, typedMassFactor, typedMomentFactor } from '../core/common/typedLength.js';
 import type { UnitSystem } from '../core/common/units.js';
 import { CriteriaSetSchema, readCriteriaSet, type CriteriaSet } from '../core/stability/criteria.js';
-import { HEEL_RANGE, parseDisplacements, parseHeels, parseOpenings } from '../core/stability/stabilityInput.js';
+import { checkHeels, HEEL_RANGE, parseDisplacements, parseHeels, parseOpenings } from '../core/stability/stabilityInput.js';
 import type { Opening } from '../core/stability/rightingLevers.js';
 import { addCoreIssues } from './validate.js';
 
@@ -43,7 +43,7 @@ export function displacementQuery(system: UnitSystem) {
     .transform((text, ctx) => {
       const v = readDecimal(text.trim());
       if (!Number.isFinite(v)) {
-        ctx.addIssue({ code: 'custom', message: `displacement '${text.slice(0, 40)}' is not one number; ${hint}`, input: text, params: { code: 'HYD_LOAD_OUT_OF_RANGE' } });
+        ctx.addIssue({ code: 'custom', message: `displacement '${text.slice(0, 40)}' is not one number; ${hint}`, input: text, params: { code: 'HYD_BAD_ARGUMENT' } });
         return z.NEVER;
       }
       return v * typedMassFactor(system);
@@ -152,10 +152,19 @@ export function openingsBody(system: UnitSystem) {
 
 const HEELS_TEXT = `heels, degrees, ${HEEL_RANGE.min} to ${HEEL_RANGE.max}: values and inclusive ranges from:step:to, at most ${LIMITS.maxHeels}`;
 
-/** `heels=0:10:90` in a query; `fallback` when left out (undefined: the computation's own). */
+/**
+ * `heels=0:10:90` in a query; `fallback` when left out (undefined: the computation's own).
+ * Each heel is held to its range here, as the query is read: a route may leave its heels
+ * unused (the report's, without displacements), and a heel of 400 degrees must not pass unnoticed.
+ */
 export function heelsQuery(fallback: string | undefined) {
   const text = z.string({ error: `heels must be given once; ${HEELS_TEXT}` }).max(MAX_LIST_TEXT, { error: `the heels text is longer than ${MAX_LIST_TEXT} characters` });
-  const read = (t: string, ctx: z.RefinementCtx): number[] => coreRule(ctx, t, () => parseHeels(t, ['heels']));
+  const read = (t: string, ctx: z.RefinementCtx): number[] =>
+    coreRule(ctx, t, () => {
+      const heels = parseHeels(t, ['heels']);
+      checkHeels(heels, ['heels']);
+      return heels;
+    });
   return (fallback === undefined ? text.optional().transform((t, ctx) => (t === undefined ? undefined : read(t, ctx))) : text.default(fallback).transform(read))
     .describe(`${HEELS_TEXT}${fallback === undefined ? '' : ` (default ${fallback})`}`)
     .meta({ examples: ['0:10:90'] });

@@ -39,7 +39,7 @@ export const ERROR_CODES = {
   HYD_MODEL_INVALID: 'A JSON hull model does not match the schema.',
   HYD_DRAFT_LIST: 'A drafts list is malformed, empty or too long.',
   HYD_DRAFT_OUT_OF_RANGE: 'A draft lies outside the hull (at or below the keel, or above the deck edge).',
-  HYD_LOAD_OUT_OF_RANGE: 'A displacement the hull cannot float: zero or less, or more than it displaces wholly immersed (or, level, within its deck).',
+  HYD_LOAD_OUT_OF_RANGE: 'A load the hull cannot float: a displacement of zero or less, too light for the offsets to resolve, or more than it displaces wholly immersed (or, level, within its deck), or a centre of gravity that no floating position balances.',
   HYD_ANGLE_RANGE: 'A heel or trim lies outside its range.',
   HYD_DECK_NOT_GIVEN: "Heeled work needs every station's deck edge, which the offsets leave unsaid at some stations.",
   HYD_CRITERIA: 'A stability criteria set is malformed: an unknown criterion, a threshold that is not a number.',

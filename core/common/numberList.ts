@@ -10,7 +10,7 @@ export interface NumberListSpec {
   /** The list's name in messages: `displacements`, `heels`. */
   readonly noun: string;
   /** The issue code of a malformed list. */
-  readonly code: 'HYD_DRAFT_LIST' | 'HYD_LOAD_OUT_OF_RANGE' | 'HYD_ANGLE_RANGE' | 'HYD_BAD_ARGUMENT';
+  readonly code: 'HYD_DRAFT_LIST' | 'HYD_BAD_ARGUMENT';
   /** Most values in all. */
   readonly max: number;
   /** An example list, for the message of an empty one. */

@@ -14,6 +14,13 @@
  * hull by its hydrostatics (common practice, no source); a TCG heels the hull by an
  * amount that depends on KG, so a TCG needs one.
  *
+ * Only a balance is an answer. Where G lies beyond the reach of the centre of buoyancy
+ * within the hull's deck and ends (an LCG near or past an end: a trimmed box's B stays at
+ * least a third of its length from either end), or G is so high and off the centreline
+ * that the hull would lie on its side, the iteration ends without one; that is
+ * HYD_LOAD_OUT_OF_RANGE naming the load and how far from a balance it stayed, never a
+ * position that does not float the load.
+ *
  * Reference: E. C. Tupper, Introduction to Naval Architecture, 5th ed. (2013), ch. 4
  * (trim and list; from memory).
  */
@@ -70,6 +77,39 @@ function offsets(v: InclinedValues, w: Waterplane, g: { x: number; y: number; z:
   return [bx * cosT + by * sin * sinT - bz * cos * sinT, by * cos + bz * sin];
 }
 
+/**
+ * A balance found is met to 1e-9 of the length (the iteration's target); one that is not
+ * met to a thousand times that is no balance at all: the iteration ran out of steps.
+ */
+const BALANCE_SLACK = 1e-6;
+
+const brief = (v: number): string => String(Number(v.toPrecision(4)));
+
+/**
+ * HYD_LOAD_OUT_OF_RANGE when the iteration ended away from a balance (volume, B from G's
+ * vertical along or across), or with the hull heeled to 90 degrees or more, where it has no
+ * drafts at its perpendiculars. Named at the TCG when the hull would not come upright enough, else at the LCG.
+ */
+function refuseUnbalanced(load: Load, volume: number, volumeOff: number, along: number, across: number, heel: number, drafts: readonly number[], lbp: number): void {
+  const heeledOver = !(Math.abs(heel) < Math.PI / 2) || !drafts.every(Number.isFinite);
+  const acrossOff = !(Math.abs(across) <= BALANCE_SLACK * lbp);
+  const alongOff = !(Math.abs(along) <= BALANCE_SLACK * lbp) || !(Math.abs(volumeOff) <= BALANCE_SLACK * volume);
+  if (!heeledOver && !acrossOff && !alongOff) return;
+  const g = `G at x = ${load.lcg} m${load.tcg !== undefined && load.tcg !== 0 ? `, y = ${load.tcg} m` : ''}${load.kg === undefined ? '' : `, KG ${load.kg} m`}`;
+  const why = heeledOver
+    ? Number.isFinite(heel)
+      ? `the hull heels to ${brief((heel * 180) / Math.PI)} degrees, where it has no drafts at its perpendiculars`
+      : 'no heel balances it'
+    : acrossOff
+      ? `B stays ${brief(Math.abs(across))} m from G's vertical across the waterplane`
+      : `B stays ${brief(Math.abs(along))} m from G's vertical along the length, the volume ${brief(volumeOff)} m3 from the load's`;
+  fail(
+    'HYD_LOAD_OUT_OF_RANGE',
+    [heeledOver || acrossOff ? 'tcg' : 'lcg'],
+    `no floating position balances the load (displacement ${load.displacement} t, ${g}): ${why}; the hull's centre of buoyancy cannot come under G within its deck and ends (it would trim past them or capsize)`,
+  );
+}
+
 /** The floating position of `load` in water of `density` (t/m³); `deck` says which deck edges the offsets leave unsaid, which a heeling TCG needs. */
 export function floatingPosition(p: PreparedHull, load: Load, density: number, deck: DeckEdges = { assumedAt: [] }): FloatingPosition {
   const volume = checkVolume(p, load.displacement, density, ['displacement']);
@@ -122,6 +162,7 @@ export function floatingPosition(p: PreparedHull, load: Load, density: number, d
   const w = fl.plane;
   const draftAft = draftAtX(w, p.perp.ap);
   const draftFwd = draftAtX(w, p.perp.fp);
+  refuseUnbalanced(load, volume, fl.values.volume - volume, r1, heeling ? r2 : 0, w.heel, [draftAft, draftFwd], lbp);
   return {
     displacement: load.displacement,
     lcg: load.lcg,

@@ -13,6 +13,7 @@ import { HalfbreadthError, issue, type Issue } from '../common/errors.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
 import { hydrostaticsAt } from '../upright/hydrostatics.js';
 import type { HydrostaticRow } from '../upright/hydrostaticFields.js';
+import { tooLightIssue } from './solveVolume.js';
 import { trimmedHydrostaticsAt } from './trimmedHydrostatics.js';
 
 const fmt = (v: number): string => String(Number(v.toPrecision(6)));
@@ -70,13 +71,18 @@ export function draftsForDisplacements(p: PreparedHull, displacements: readonly 
   const at = trim === 0 ? 'level' : `at a trim of ${trim} m`;
   const issues: Issue[] = [];
   displacements.forEach((dis, k) => {
+    const path = ['displacements', k];
     if (!Number.isFinite(dis) || !(dis > 0)) {
-      issues.push(issue('HYD_LOAD_OUT_OF_RANGE', ['displacements', k], `displacement ${dis} t: a hull floats a displacement above zero`));
-    } else if (dis > most) {
+      issues.push(issue('HYD_LOAD_OUT_OF_RANGE', path, `displacement ${dis} t: a hull floats a displacement above zero`));
+      return;
+    }
+    const light = tooLightIssue(p, dis, density, path);
+    if (light !== undefined) issues.push(light);
+    else if (dis > most) {
       issues.push(
         issue(
           'HYD_LOAD_OUT_OF_RANGE',
-          ['displacements', k],
+          path,
           `displacement ${fmt(dis)} t is more than the hull floats ${at} within its deck: ${fmt(most)} t with the waterline at its lowest deck edge (draft ${fmt(hi)} m amidships) in water of ${density} t/m3`,
         ),
       );

@@ -10,7 +10,7 @@
  * Reference: W. H. Press et al., Numerical Recipes, 3rd ed. (Cambridge, 2007), sec. 9.4
  * ("rtsafe", Newton with bisection; from memory).
  */
-import { fail } from '../common/errors.js';
+import { fail, HalfbreadthError, issue, type Issue } from '../common/errors.js';
 import type { PreparedHull } from '../hull/preparedHull.js';
 import { extremesAt, inclinedHydrostatics, type InclinedValues, type Waterplane } from './inclinedHydrostatics.js';
 
@@ -79,13 +79,37 @@ export function enclosedVolume(p: PreparedHull): number {
 }
 
 /**
+ * The lightest load worked, as a share of the hull's whole enclosed volume. Lighter, the
+ * waterplane lies within a few millionths of a metre of the keel on a hull of a few metres,
+ * where the solvers' steps (1e-13 of the hull's size on the waterplane's offset) no longer
+ * resolve it: on a 10 m box KN upright drifts from 0 by 1e-5 m at 1e-12 of the volume and
+ * is NaN at 1e-16. No loading of a real hull is within a factor of a million of it
+ * (common practice, no source).
+ */
+export const LEAST_VOLUME_SHARE = 1e-9;
+
+/** The issue (HYD_LOAD_OUT_OF_RANGE at `path`) of a displacement (t) lighter than the lightest load worked, LEAST_VOLUME_SHARE of the enclosed volume; undefined when it is not. */
+export function tooLightIssue(p: PreparedHull, displacement: number, density: number, path: readonly (string | number)[]): Issue | undefined {
+  const least = LEAST_VOLUME_SHARE * enclosedVolume(p);
+  if (!(displacement / density < least)) return undefined;
+  return issue(
+    'HYD_LOAD_OUT_OF_RANGE',
+    path,
+    `displacement ${displacement} t is too light to float at a draft these offsets resolve: at least ${Number((least * density).toPrecision(2))} t (${LEAST_VOLUME_SHARE} of the ${Number((enclosedVolume(p) * density).toPrecision(6))} t the hull displaces wholly immersed)`,
+  );
+}
+
+/**
  * The volume a displacement asks for, or HYD_LOAD_OUT_OF_RANGE at `path` when the hull
- * cannot float it: zero or less, or more than its whole enclosed volume.
+ * cannot float it: zero or less, too light to resolve (tooLightIssue), or more than its
+ * whole enclosed volume.
  */
 export function checkVolume(p: PreparedHull, displacement: number, density: number, path: readonly (string | number)[]): number {
   if (!Number.isFinite(displacement) || !(displacement > 0)) {
     fail('HYD_LOAD_OUT_OF_RANGE', path, `displacement ${displacement} t: a hull floats a displacement above zero`);
   }
+  const light = tooLightIssue(p, displacement, density, path);
+  if (light !== undefined) throw new HalfbreadthError([light]);
   const most = enclosedVolume(p);
   const volume = displacement / density;
   if (volume >= most) {

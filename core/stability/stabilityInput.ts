@@ -5,6 +5,11 @@
  * values and ranges from:step:to, core/common/numberList.ts; openings as `x,y,z` points
  * separated by `;`) and the size of a set of cross curves.
  *
+ * A list or a point that cannot be read (a word, a range the wrong way round, more values
+ * than the limit) is a malformed argument, HYD_BAD_ARGUMENT (400 in the service), as the
+ * same fault in a JSON body is; HYD_ANGLE_RANGE and HYD_LOAD_OUT_OF_RANGE are kept for
+ * values that read but break their rule (a heel past a half turn, a load the hull cannot float).
+ *
  * Heeled, a section's immersed part depends on where its deck edge is (deck immersion);
  * a grid table that stops at its top waterline without saying the deck edge is there
  * leaves that unknown, and a heeled figure would rest on a guess. So heeled work is
@@ -50,14 +55,14 @@ export function checkDeckEdges(p: PreparedHull, heels: readonly number[], deck: 
 
 /** Displacements `5:2.5:15,16`, in tonnes (long tons with imperial units); given in tonnes. */
 export function parseDisplacements(text: string, path: readonly (string | number)[] = ['displacements'], system: UnitSystem = 'si'): number[] {
-  const values = parseNumberList(text, path, { noun: 'displacements', code: 'HYD_LOAD_OUT_OF_RANGE', max: LIMITS.maxDisplacements, example: '5:2.5:15,16' });
+  const values = parseNumberList(text, path, { noun: 'displacements', code: 'HYD_BAD_ARGUMENT', max: LIMITS.maxDisplacements, example: '5:2.5:15,16' });
   const f = typedMassFactor(system);
   return f === 1 ? values : values.map((v) => v * f);
 }
 
 /** Heels, degrees: `0:10:90` or `-30:5:30`; each within HEEL_RANGE, checked where they are used. */
 export function parseHeels(text: string, path: readonly (string | number)[] = ['heels']): number[] {
-  return parseNumberList(text, path, { noun: 'heels', code: 'HYD_ANGLE_RANGE', max: LIMITS.maxHeels, example: '0:10:90' });
+  return parseNumberList(text, path, { noun: 'heels', code: 'HYD_BAD_ARGUMENT', max: LIMITS.maxHeels, example: '0:10:90' });
 }
 
 /**
@@ -67,12 +72,12 @@ export function parseHeels(text: string, path: readonly (string | number)[] = ['
  */
 export function parseOpenings(text: string, path: readonly (string | number)[] = ['openings'], system: UnitSystem = 'si'): Opening[] {
   const parts = text.split(';').map((s) => s.trim()).filter((s) => s !== '');
-  if (parts.length > LIMITS.maxOpenings) fail('HYD_OPENING', path, `more than ${LIMITS.maxOpenings} openings`);
+  if (parts.length > LIMITS.maxOpenings) fail('HYD_BAD_ARGUMENT', path, `more than ${LIMITS.maxOpenings} openings`);
   const unit = TYPED_LENGTH_UNIT[system];
   return parts.map((part, k) => {
     const nums = part.split(',').map((s) => readTypedLength(s.trim(), system));
     if (nums.length !== 3 || nums.some((v) => !Number.isFinite(v))) {
-      fail('HYD_OPENING', [...path, k], `opening ${k + 1} "${part.slice(0, 40)}" is not a point x,y,z in ${unit} (openings are separated by ;, e.g. 4.2,1.1,1.6;6,-0.9,1.8)`);
+      fail('HYD_BAD_ARGUMENT', [...path, k], `opening ${k + 1} "${part.slice(0, 40)}" is not a point x,y,z in ${unit} (openings are separated by ;, e.g. 4.2,1.1,1.6;6,-0.9,1.8)`);
     }
     const [x, y, z] = nums as [number, number, number];
     return { x, y, z };

@@ -9,6 +9,7 @@ import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { CAUTION } from '../../core/common/caution.js';
 import { buildApp } from '../../server/app.js';
+import { CrossCurvesResultSchema, FloatResultSchema, GzResultSchema } from '../../server/stabilitySchemas.js';
 import { BAD_REQUESTS, GOOD_OFFSETS, HOSTILE_NAMES } from '../fixtures/badRequests.js';
 import { csvHeaders, expectHealthy, expectProblem } from '../fixtures/serverHelpers.js';
 
@@ -35,6 +36,7 @@ describe('the corpus of bad requests', () => {
     expect(doc.type).toBe(bad.type);
     expect(doc.errors[0]!.code).toBe(bad.code);
     expect(doc.errors[0]!.path).toEqual(bad.path);
+    if (bad.detail !== undefined) expect(doc.detail).toMatch(bad.detail);
     await expectHealthy(app);
   });
 
@@ -167,6 +169,30 @@ describe('arbitrary input never fails the service', () => {
       }),
       { numRuns: 300 },
     );
+  });
+
+  test('any load on the stability routes gets a 4xx problem or a 200 whose every figure is a finite number, never a 5xx', async () => {
+    // The corpus box with its deck edges (2 m x 2 m x 1 m, 4.1 t wholly immersed), posted.
+    const decked = '# units: m\nx,deck_z,deck_y,0,0.5,1\n0,1,1,1,1,1\n1,1,1,1,1,1\n2,1,1,1,1,1\n';
+    const value = fc.oneof(fc.double({ min: 1e-9, max: 4.2, noNaN: true }), fc.double({ min: -2, max: 5, noNaN: true }), fc.double({ noNaN: true, noDefaultInfinity: true }), fc.constantFrom(0, 5e-324, 1e-300, 1e300, 4.1, 2));
+    const heel = fc.double({ min: -180, max: 180, noNaN: true });
+    const routes = {
+      float: { url: (v: number[]) => `/v1/float?displacement=${v[0]}&lcg=${v[1]}&kg=${v[2]}&tcg=${v[3]}`, schema: FloatResultSchema },
+      gz: { url: (v: number[], h: number) => `/v1/gz?displacement=${v[0]}&kg=${v[1]}&fsm=${Math.abs(v[2]!)}&heels=0,${h}`, schema: GzResultSchema },
+      'cross-curves': { url: (v: number[], h: number) => `/v1/cross-curves?displacements=${v[0]},${v[1]}&heels=${h}&trim=${v[2]! > 0 ? 'free' : 'level'}`, schema: CrossCurvesResultSchema },
+    };
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...(Object.keys(routes) as (keyof typeof routes)[])), fc.array(value, { minLength: 4, maxLength: 4 }), heel, async (name, v, h) => {
+        const url = routes[name].url(v, h);
+        const res = await app.inject({ method: 'POST', url, headers: csvHeaders, payload: decked });
+        expect(res.statusCode, url).toBeLessThan(500);
+        if (res.statusCode !== 200) expectProblem(res, res.statusCode);
+        // The result schemas take finite numbers only: a NaN written as null fails here.
+        else expect(routes[name].schema.safeParse(JSON.parse(res.body)).success, `${url}: ${res.body.slice(0, 400)}`).toBe(true);
+      }),
+      { numRuns: 150 },
+    );
+    await expectHealthy(app);
   });
 
   test('offsets a little wrong in many ways get a 200 or a 4xx problem, never a 5xx', async () => {

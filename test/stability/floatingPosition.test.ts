@@ -18,7 +18,9 @@ import { isHalfbreadthError } from '../../core/common/errors.js';
 import type { HullModel } from '../../core/hull/hullModel.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
+import { crossCurves } from '../../core/stability/crossCurves.js';
 import { floatingPosition } from '../../core/stability/floatingPosition.js';
+import { rightingLevers } from '../../core/stability/rightingLevers.js';
 import { inclinedHydrostatics, waterplaneOf } from '../../core/stability/inclinedHydrostatics.js';
 import { draftsForDisplacements } from '../../core/stability/levelDrafts.js';
 import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
@@ -112,5 +114,72 @@ describe('level drafts for displacements', () => {
     expect(codeOf(() => floatingPosition(p, { displacement: 500, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE displacement 500 t is more than the hull can float: wholly immersed to its deck it displaces [\d.]+ t/);
     expect(codeOf(() => floatingPosition(p, { displacement: -1, lcg: 4 }, rho))).toMatch(/HYD_LOAD_OUT_OF_RANGE/);
     expect(codeOf(() => floatingPosition(p, { displacement: 3, lcg: 4, tcg: 0.1 }, rho))).toMatch(/HYD_BAD_ARGUMENT a TCG of 0.1 m heels the hull by an amount that depends on the height of G: give KG/);
+  });
+});
+
+describe('a load too light to resolve', () => {
+  // A box 10 m x 4 m x 2 m encloses 80 m3.
+  const p = prepareHull(boxBarge(10, 4, 2, 5, 5));
+  const least = 80 * 1e-9 * rho;
+
+  test('below 1e-9 of what the hull displaces wholly immersed, every stability computation refuses it, naming it', () => {
+    for (const d of [5e-324, 1e-300, 0.99 * least]) {
+      const words = /HYD_LOAD_OUT_OF_RANGE .*too light to float at a draft these offsets resolve: at least 8\.2e-8 t/;
+      expect(codeOf(() => floatingPosition(p, { displacement: d, lcg: 5 }, rho))).toMatch(words);
+      expect(codeOf(() => crossCurves(p, [1, d], [0, 10], rho))).toMatch(words);
+      expect(codeOf(() => rightingLevers(p, { displacement: d, kg: 1 }, rho))).toMatch(words);
+      expect(codeOf(() => draftsForDisplacements(p, [d], rho))).toMatch(words);
+    }
+  });
+
+  test('ten times that floats at the corner of the bilge: KN of the small triangle there (elementary geometry), 0 upright', () => {
+    // Heeled phi, the immersed section is a right triangle at the bilge, legs a along the
+    // bottom and a tan(phi) up the side, of area a^2 tan(phi) / 2 = V / L; its centroid
+    // (B/2 - a/3, a tan(phi) / 3) gives KN = (B/2 - a/3) cos(phi) + (a tan(phi) / 3) sin(phi).
+    const d = 10 * least;
+    const phi = (10 * Math.PI) / 180;
+    const a = Math.sqrt((2 * (d / rho)) / 10 / Math.tan(phi));
+    const [upright, heeled] = crossCurves(p, [d], [0, 10], rho);
+    expect(Math.abs(upright!.kn)).toBeLessThan(1e-7);
+    expect(heeled!.kn).toBeRelClose((2 - a / 3) * Math.cos(phi) + ((a * Math.tan(phi)) / 3) * Math.sin(phi), 1e-6);
+    expect(draftsForDisplacements(p, [d], rho)[0]).toBeRelClose(d / (rho * 40), 1e-6);
+  });
+});
+
+describe('a load with no balance within the hull is refused, never answered', () => {
+  // A box 20 m x 6 m x 4 m at draft 1.3 m. Trimmed with its waterline within the ends and
+  // the deck, the immersed side is a trapezium or a triangle, whose centroid lies at least
+  // L/3 from an end (elementary geometry): an LCG nearer an end than that, or beyond it,
+  // has no floating position a table of offsets can give.
+  const L = 20;
+  const p = prepareHull(boxBarge(L, 6, 4, 11, 5));
+  const displacement = rho * L * 6 * 1.3;
+
+  test.each([
+    ['G aft of the hull', { displacement, lcg: -5 }, 'lcg'],
+    ['G at the aft end', { displacement, lcg: 0 }, 'lcg'],
+    ['G 1 m from the fore end', { displacement, lcg: L - 1, kg: 2 }, 'lcg'],
+    ['a TCG of 1e300 m', { displacement, lcg: L / 2, kg: 2, tcg: 1e300 }, 'tcg'],
+    ['a KG of 1e300 m with a TCG', { displacement, lcg: L / 2, kg: 1e300, tcg: 0.5 }, 'tcg'],
+  ] as const)('%s', (_name, load, field) => {
+    expect(codeOf(() => floatingPosition(p, load, rho))).toMatch(/^HYD_LOAD_OUT_OF_RANGE no floating position balances the load \(displacement [\d.]+ t, G at x = .*\): /);
+    let path: unknown;
+    try {
+      floatingPosition(p, load, rho);
+    } catch (e) {
+      if (isHalfbreadthError(e)) path = e.issues[0]!.path;
+    }
+    expect(path).toEqual([field]);
+  });
+
+  test('an LCG just inside the reach of the trapezium still floats, and balances', () => {
+    // LCB of the trapezium with dF = 0.1 m: L (dA + 2 dF) / (3 (dA + dF)), dA = 2T - dF.
+    const T = 1.3;
+    const dF = 0.1;
+    const dA = 2 * T - dF;
+    const lcg = (L * (dA + 2 * dF)) / (3 * (dA + dF));
+    const fp = floatingPosition(p, { displacement, lcg }, rho);
+    expect(fp.draftFwd).toBeRelClose(dF, 1e-6);
+    expect(fp.draftAft).toBeRelClose(dA, 1e-6);
   });
 });

@@ -27,9 +27,10 @@ describe('displacements and heels', () => {
   });
 
   test('each fault names the list, the item and the rule', () => {
-    expect(issueOf(() => parseDisplacements(''))).toMatch(/^HYD_LOAD_OUT_OF_RANGE \["displacements"\] the displacements list is empty/);
-    expect(issueOf(() => parseDisplacements('5,ten'))).toMatch(/^HYD_LOAD_OUT_OF_RANGE \["displacements",1\] displacements item 2 "ten": not a number/);
-    expect(issueOf(() => parseHeels('0:-5:30'))).toMatch(/^HYD_ANGLE_RANGE \["heels",0\] heels item 1 "0:-5:30": the step must be greater than zero/);
+    // Malformed, not out of range: HYD_BAD_ARGUMENT, as a JSON body's malformed field is.
+    expect(issueOf(() => parseDisplacements(''))).toMatch(/^HYD_BAD_ARGUMENT \["displacements"\] the displacements list is empty/);
+    expect(issueOf(() => parseDisplacements('5,ten'))).toMatch(/^HYD_BAD_ARGUMENT \["displacements",1\] displacements item 2 "ten": not a number/);
+    expect(issueOf(() => parseHeels('0:-5:30'))).toMatch(/^HYD_BAD_ARGUMENT \["heels",0\] heels item 1 "0:-5:30": the step must be greater than zero/);
     expect(issueOf(() => parseHeels('30:5:0'))).toMatch(/the range must run upwards/);
     expect(issueOf(() => parseHeels('0:5'))).toMatch(/a range is written from:step:to/);
     expect(issueOf(() => parseHeels('0x10'))).toMatch(/not a number/);
@@ -47,8 +48,8 @@ describe('openings', () => {
   });
 
   test('a point that is not three numbers is refused, naming it', () => {
-    expect(issueOf(() => parseOpenings('4.2,1.1,1.6;6,1.8'))).toMatch(/^HYD_OPENING \["openings",1\] opening 2 "6,1.8" is not a point x,y,z in m/);
-    expect(issueOf(() => parseOpenings('a,b,c'))).toMatch(/^HYD_OPENING/);
+    expect(issueOf(() => parseOpenings('4.2,1.1,1.6;6,1.8'))).toMatch(/^HYD_BAD_ARGUMENT \["openings",1\] opening 2 "6,1.8" is not a point x,y,z in m/);
+    expect(issueOf(() => parseOpenings('a,b,c'))).toMatch(/^HYD_BAD_ARGUMENT/);
   });
 });
 
