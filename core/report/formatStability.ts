@@ -95,9 +95,12 @@ export const knKey = (heel: number): string => `kn_${heel}deg`;
  * per displacement and one KN column per heel.
  */
 export function crossCurvesForm(heels: readonly number[]): AnswerForm<CrossCurvesResult> {
+  // A heel typed twice (0:10:90,30) is one column, as a displacement typed twice is one
+  // row: a table with two columns of one name would not read back.
+  const distinct = [...new Set(heels)];
   return {
     units: { hull: HULL_UNITS, rows: [{ displacement: 't', heel: 'deg', kn: 'm', draft: 'm', trim: 'm' }] },
-    columns: [{ key: 'displacement', unit: 't', label: 'Displacement' }, ...heels.map((h) => ({ key: knKey(h), unit: 'm', label: `KN ${h}°` }))],
+    columns: [{ key: 'displacement', unit: 't', label: 'Displacement' }, ...distinct.map((h) => ({ key: knKey(h), unit: 'm', label: `KN ${h}°` }))],
     rows: (r) => {
       const byDisplacement = new Map<number, Record<string, unknown>>();
       for (const row of r.rows) {

@@ -212,6 +212,18 @@ describe('cross-curves on a box barge', () => {
   });
 });
 
+describe('cross-curves with a value typed twice', () => {
+  test('a heel or displacement given twice is one CSV column or row, with the same KN', async () => {
+    const r = await runCli(['cross-curves', BOX, '--displacements', '41,45,41', '--heels', '0,10,5,10']);
+    expect(r.code).toBe(0);
+    const { header, rows } = csvTable(r.out);
+    expect(header).toEqual(['displacement_t', 'kn_0deg_m', 'kn_10deg_m', 'kn_5deg_m']);
+    expect(rows.map((row) => Number(row[0]))).toEqual([41, 45]);
+    // The wall-sided formula, as above.
+    rows.forEach((row, i) => [0, 10, 5].forEach((h, k) => expect(Number(row[k + 1])).toBeRelClose(knWallSided(draftOf([41, 45][i]!), h), REL, ABS)));
+  });
+});
+
 describe('gz on a box barge', () => {
   // At T = D / 2 the clipped rectangle gives GZ at every heel (see the module note).
   const displacement = RHO * L * B * (D / 2);
