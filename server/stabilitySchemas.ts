@@ -47,6 +47,8 @@ export const FloatResultSchema = z
         transverse: z.number().describe("B's distance from G's vertical across the waterplane, m"),
       })
       .describe('what is left of the balance'),
+    gm: z.number().nullable().describe('the metacentric height at the balance, m: the slope of GZ there per radian (GM0 = KMt - KG upright); null without a KG'),
+    stable: z.boolean().nullable().describe('whether the balance is stable to a small heel (gm above zero); false where the vessel would loll or capsize; null without a KG'),
   })
   .describe('the floating position of a load');
 

@@ -345,6 +345,9 @@ async function showLoading() {
   ];
   if (floated !== null) {
     pairs.unshift(['Floats at', `draft aft ${cell(floated.draftAft, 'm')} m, forward ${cell(floated.draftFwd, 'm')} m, trim ${cell(floated.trim, 'm')} m by the ${floated.trim >= 0 ? 'stern' : 'head'}`]);
+    if (floated.stable === false) {
+      pairs.splice(1, 0, ['Unstable upright', `GM at that balance is ${cell(floated.gm, 'm')} m: the vessel would not rest there but loll or capsize; read the GZ curve below`]);
+    }
   }
   facts($('loading-results'), pairs);
   const headRow = document.createElement('tr');

@@ -57,14 +57,19 @@ Options:
 
 Forms:
   table, csv  one row: displacement, LCG, TCG, KG, draft aft and forward, trim,
-              heel, draft amidships, LCB, TCB, VCB; the residuals under it
+              heel, draft amidships, LCB, TCB, VCB, GM; the residuals under it
   json        { "hull", "density", "caution", "displacement", "lcg", "tcg",
               "kg", "draftAft", "draftFwd", "trim", "heel", "draft", "lcb",
               "tcb", "vcb", "residuals": { "volume", "longitudinal",
-              "transverse" } }
+              "transverse" }, "gm", "stable" }
+
+With --kg, GM is the metacentric height at the balance (the slope of GZ there)
+and "stable" whether a small heel is righted; an unstable balance (G above the
+metacentre) is said in words: the vessel would loll or capsize, and gz shows which.
 
 Every form carries the caution. Exit status: 0 done; 2 bad input (a load the
-hull cannot float is refused, naming the most it floats).
+hull cannot float is refused, naming the most it floats; so is a centre of
+gravity no floating position balances).
 
 Example:
   halfbreadth float offsets-demo/survey-launch.csv --displacement 4.5 --lcg 4.3`,

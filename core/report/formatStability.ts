@@ -56,6 +56,7 @@ const FLOAT_COLUMNS: readonly TableColumn[] = [
   { key: 'lcb', unit: 'm', label: 'LCB' },
   { key: 'tcb', unit: 'm', label: 'TCB' },
   { key: 'vcb', unit: 'm', label: 'VCB' },
+  { key: 'gm', unit: 'm', label: 'GM' },
 ];
 
 export const FLOAT_FORM: AnswerForm<FloatResult> = {
@@ -63,12 +64,18 @@ export const FLOAT_FORM: AnswerForm<FloatResult> = {
     hull: HULL_UNITS,
     ...Object.fromEntries(FLOAT_COLUMNS.map((c) => [c.key, c.unit])),
     residuals: { volume: 'm3', longitudinal: 'm', transverse: 'm' },
+    stable: '',
   },
   columns: FLOAT_COLUMNS,
   rows: (r) => [r as unknown as Row],
   lines: (r, ctx) => [
     ...headLines(r, ctx),
-    `floating position of the load: B under G${r.kg === null ? ' (no KG given: LCB = LCG, upright)' : ''}; T mid is the draft amidships`,
+    `floating position of the load: B under G${r.kg === null ? ' (no KG given: LCB = LCG, upright)' : ''}; T mid is the draft amidships${r.gm === null ? '' : '; GM is the metacentric height at the balance, the slope of GZ there per radian'}`,
+    ...(r.stable === false
+      ? [
+          `UNSTABLE: GM at this balance is ${brief(r.gm!, ctx)} ${ctx.u('m')}, below zero, so the vessel would not rest here: a small heel grows until it lolls to an angle where GZ is zero again with a rising slope, or capsizes; the gz curve of this loading shows which`,
+        ]
+      : []),
   ],
   notes: (r, ctx) => [
     `residuals of the balance: volume ${brief(r.residuals.volume, ctx)} ${ctx.u('m3')}; B from G's vertical ${brief(r.residuals.longitudinal, ctx)} ${ctx.u('m')} along and ${brief(r.residuals.transverse, ctx)} ${ctx.u('m')} across`,

@@ -61,7 +61,21 @@ export interface FloatingPosition {
   readonly vcb: number;
   /** What is left of the balance: volume (m³) and the horizontal distances between the verticals through B and G along and across the waterplane (m). */
   readonly residuals: { readonly volume: number; readonly longitudinal: number; readonly transverse: number };
+  /**
+   * The metacentric height at the balance, m: the slope dGZ/dφ of the righting lever
+   * there (per radian), GM0 = KMt - KG when the hull floats upright. Null without a KG.
+   */
+  readonly gm: number | null;
+  /** Whether the balance is stable to a small heel (gm > 0): false where the vessel would not rest but loll or capsize. Null without a KG. */
+  readonly stable: boolean | null;
 }
+
+/**
+ * Heel of the difference for the slope of GZ at the balance, rad. Small enough that the
+ * curve is straight over it (GZ's curvature there moves the slope by about 1e-6 of GM),
+ * large enough that the volume solves' 1e-10 tolerance does not show.
+ */
+const SLOPE_STEP = 1e-4;
 
 /** The horizontal offsets of B from G's vertical, along e1 (length) and e2 (across) of the waterplane. */
 function offsets(v: InclinedValues, w: Waterplane, g: { x: number; y: number; z: number }): [number, number] {
@@ -163,6 +177,17 @@ export function floatingPosition(p: PreparedHull, load: Load, density: number, d
   const draftAft = draftAtX(w, p.perp.ap);
   const draftFwd = draftAtX(w, p.perp.fp);
   refuseUnbalanced(load, volume, fl.values.volume - volume, r1, heeling ? r2 : 0, w.heel, [draftAft, draftFwd], lbp);
+  // The balance's stability to a small heel: the across offset of B from G's vertical is
+  // GZ (with the TCG), so its slope in the heel is the metacentric height at the balance
+  // (central difference, the trim held: it moves GZ only at second order).
+  let gm: number | null = null;
+  if (load.kg !== undefined) {
+    const across = (phi: number): number => {
+      const a = solveAt(w.trimAngle, phi, w.h);
+      return offsets(a.values, a.plane, gOf(a.values))[1];
+    };
+    gm = (across(w.heel + SLOPE_STEP) - across(w.heel - SLOPE_STEP)) / (2 * SLOPE_STEP);
+  }
   return {
     displacement: load.displacement,
     lcg: load.lcg,
@@ -178,5 +203,7 @@ export function floatingPosition(p: PreparedHull, load: Load, density: number, d
     tcb: w.heel === 0 && Math.abs(fl.values.yB) <= 1e-12 * lbp ? 0 : fl.values.yB,
     vcb: fl.values.zB,
     residuals: { volume: fl.values.volume - volume, longitudinal: r1, transverse: r2 },
+    gm,
+    stable: gm === null ? null : gm > 0,
   };
 }

@@ -150,7 +150,7 @@ describe('float on a box barge', () => {
     expect(csvComments(r.out)[0]).toBe(CAUTION);
     const { header, rows } = csvTable(r.out);
     // Units after each name, as the conventions' CSV headers (volume_m3) write them.
-    expect(header).toEqual(['displacement_t', 'lcg_m', 'tcg_m', 'kg_m', 'draftAft_m', 'draftFwd_m', 'trim_m', 'heel_deg', 'draft_m', 'lcb_m', 'tcb_m', 'vcb_m']);
+    expect(header).toEqual(['displacement_t', 'lcg_m', 'tcg_m', 'kg_m', 'draftAft_m', 'draftFwd_m', 'trim_m', 'heel_deg', 'draft_m', 'lcb_m', 'tcb_m', 'vcb_m', 'gm_m']);
     expect(rows).toHaveLength(1);
     expect(Number(rows[0]![header.indexOf('draft_m')])).toBeRelClose(T, REL);
     const table = await runCli(['float', BOX, '--displacement', String(displacement), '--lcg', String(XM)], { ttyOut: true });

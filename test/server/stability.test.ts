@@ -148,7 +148,7 @@ describe('the floating position of a load', () => {
     const url = `/v1/float?displacement=${at(1)}&lcg=4.8`;
     const json = await post(url);
     const csv = await postCsv(url);
-    expect(csv.header).toEqual(['displacement_t', 'lcg_m', 'tcg_m', 'kg_m', 'draftAft_m', 'draftFwd_m', 'trim_m', 'heel_deg', 'draft_m', 'lcb_m', 'tcb_m', 'vcb_m']);
+    expect(csv.header).toEqual(['displacement_t', 'lcg_m', 'tcg_m', 'kg_m', 'draftAft_m', 'draftFwd_m', 'trim_m', 'heel_deg', 'draft_m', 'lcb_m', 'tcb_m', 'vcb_m', 'gm_m']);
     expect(csv.rows).toHaveLength(1);
     csv.header.forEach((h, c) => {
       const key = h.slice(0, h.lastIndexOf('_'));

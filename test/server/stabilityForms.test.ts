@@ -48,7 +48,7 @@ const UNIT_OF: Readonly<Record<string, string>> = {
   ap: 'm', fp: 'm', lbp: 'm', stations: '-', waterlines: '-', density: '-',
   displacement: 't', displacements: 't', lcg: 'm', tcg: 'm', kg: 'm', draftAft: 'm', draftFwd: 'm', trim: 'm', heel: '-', draft: 'm',
   lcb: 'm', tcb: 'm', vcb: 'm', volume: 'm3', longitudinal: 'm', transverse: 'm', kn: 'm',
-  fsm: 't.m', kgEffective: 'm', gm0: 'm', gz: 'm', area: 'm.rad', maxGz: 'm', angleOfMaxGz: '-', vanishingAngle: '-', downfloodingAngle: '-',
+  fsm: 't.m', kgEffective: 'm', gm0: 'm', gm: 'm', gz: 'm', area: 'm.rad', maxGz: 'm', angleOfMaxGz: '-', vanishingAngle: '-', downfloodingAngle: '-',
   waterplaneArea: 'm2', lcf: 'm', iT: 'm4', iL: 'm4', bmt: 'm', bml: 'm', kmt: 'm', kml: 'm', tpc: 't/cm', mct1cm: 't.m/cm',
   lwl: 'm', bwl: 'm', am: 'm2', wettedSurface: 'm2', cb: '-', cm: '-', cp: '-', cwp: '-',
 };
@@ -153,7 +153,7 @@ describe('units=imperial', () => {
     const head = async (q: string) => (await get(`/v1/hulls/${id}/${q}&units=imperial&format=csv`)).body.split('\r\n').find((l) => !l.startsWith('#'));
     expect(await head('cross-curves?displacements=40&heels=0,10')).toBe('displacement_LT,kn_0deg_ft,kn_10deg_ft');
     expect(await head('gz?displacement=40&kg=3.5&heels=0,10')).toBe('heel_deg,gz_ft,area_ft_rad');
-    expect(await head('float?displacement=40&lcg=16')).toBe('displacement_LT,lcg_ft,tcg_ft,kg_ft,draftAft_ft,draftFwd_ft,trim_ft,heel_deg,draft_ft,lcb_ft,tcb_ft,vcb_ft');
+    expect(await head('float?displacement=40&lcg=16')).toBe('displacement_LT,lcg_ft,tcg_ft,kg_ft,draftAft_ft,draftFwd_ft,trim_ft,heel_deg,draft_ft,lcb_ft,tcb_ft,vcb_ft,gm_ft');
   });
 });
 

@@ -72,6 +72,48 @@ describe('a box barge with its centre of gravity off its centre of buoyancy', ()
   });
 });
 
+describe('the stability of the balance: GM there, the slope of GZ', () => {
+  // A box barge: KB = T/2, BM = B²/(12 T), so upright GM = T/2 + B²/(12 T) - KG; heeled
+  // by a TCG within the wall-sided range, GZ(φ) = sin φ (GM + ½ BM tan² φ) - TCG cos φ
+  // (the wall-sided formula: C. B. Barrass & D. R. Derrett, Ship Stability for Masters and
+  // Mates, 7th ed., 2012, from memory), whose slope at the balance is GM there.
+  const L = 20;
+  const B = 6;
+  const T = 1.3;
+  const p = prepareHull(boxBarge(L, B, 4, 11, 5));
+  const displacement = rho * L * B * T;
+  const BM = (B * B) / (12 * T);
+
+  test('upright, GM is KB + BM - KG, and the balance is stable only while it is above zero', () => {
+    for (const kg of [1.5, 2.5, 3.5]) {
+      const fp = floatingPosition(p, { displacement, lcg: L / 2, kg }, rho);
+      const gm0 = T / 2 + BM - kg;
+      expect(fp.heel).toBe(0);
+      expect(fp.gm!, `KG ${kg}`).toBeRelClose(gm0, 1e-6, 1e-7);
+      expect(fp.stable, `KG ${kg}`).toBe(gm0 > 0);
+    }
+  });
+
+  test('listed by a TCG, GM is the slope of the wall-sided GZ at the angle of list', () => {
+    const kg = 2;
+    const gm0 = T / 2 + BM - kg;
+    const fp = floatingPosition(p, { displacement, lcg: L / 2, kg, tcg: 0.2 }, rho);
+    const phi = (fp.heel * Math.PI) / 180;
+    const t = Math.tan(phi);
+    // The list itself: GZ(φ) = 0.
+    expect(Math.sin(phi) * (gm0 + 0.5 * BM * t * t)).toBeRelClose(0.2 * Math.cos(phi), 1e-6);
+    const slope = Math.cos(phi) * (gm0 + 0.5 * BM * t * t) + Math.sin(phi) * BM * t / Math.cos(phi) ** 2 + 0.2 * Math.sin(phi);
+    expect(fp.gm!).toBeRelClose(slope, 1e-5);
+    expect(fp.stable).toBe(true);
+  });
+
+  test('without a KG the height of G is unknown, and so is the stability', () => {
+    const fp = floatingPosition(p, { displacement, lcg: L / 2 }, rho);
+    expect(fp.gm).toBeNull();
+    expect(fp.stable).toBeNull();
+  });
+});
+
 describe('on any hull the floating position balances', () => {
   test.each([
     ['the demo workboat', demo('workboat.csv'), { displacement: 40, lcg: 6.3, kg: 1.4 }],
