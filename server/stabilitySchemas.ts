@@ -82,6 +82,7 @@ export const GzResultSchema = z
     maxGz: z.number().describe('m'),
     angleOfMaxGz: z.number().describe('degrees'),
     vanishingAngle: z.number().nullable().describe('degrees; null when GZ stays positive to 180'),
+    lollAngle: z.number().nullable().describe('the angle of loll, degrees: where GZ, negative off the upright (GM0 below zero), rises through zero again; null when there is none'),
     downfloodingAngle: z.number().nullable().describe('degrees; null without openings, or when none reaches the water'),
     criteriaSet: z.object({ name: z.string(), source: z.string() }),
     criteria: z.array(

@@ -343,6 +343,7 @@ async function showLoading() {
     ['Largest GZ', `${cell(gz.maxGz, 'm')} m at ${gz.angleOfMaxGz.toFixed(1)}°`],
     ['Angle of vanishing stability', gz.vanishingAngle === null ? 'beyond the curve worked' : `${gz.vanishingAngle.toFixed(1)}°`],
   ];
+  if (gz.lollAngle !== null) pairs.push(['Angle of loll', `${gz.lollAngle.toFixed(1)}°: GM0 is below zero, so the vessel lolls to this angle to either side`]);
   if (floated !== null) {
     pairs.unshift(['Floats at', `draft aft ${cell(floated.draftAft, 'm')} m, forward ${cell(floated.draftFwd, 'm')} m, trim ${cell(floated.trim, 'm')} m by the ${floated.trim >= 0 ? 'stern' : 'head'}`]);
     if (floated.stable === false) {

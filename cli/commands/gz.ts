@@ -78,9 +78,10 @@ Forms:
   json        { "hull", "density", "caution", "displacement", "kg", "fsm",
               "kgEffective", "trim", "gm0", "points": [ { "heel", "gz" } ],
               "areas": [ { "heel", "area" } ], "maxGz", "angleOfMaxGz",
-              "vanishingAngle", "downfloodingAngle", "criteriaSet",
-              "criteria": [ { "id", "required", "actual", "unit", "pass" } ],
-              "notes" }
+              "vanishingAngle", "lollAngle", "downfloodingAngle",
+              "criteriaSet", "criteria": [ { "id", "required", "actual",
+              "unit", "pass" } ], "notes" }; lollAngle is the angle of loll
+              where GM0 is below zero and GZ rises through zero again
 
 A KG that gives a negative GM0 is answered, with the criteria it fails. Every
 form carries the caution: the verdicts do not replace an approved stability book.

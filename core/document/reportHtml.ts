@@ -164,7 +164,7 @@ function stabilitySections(name: string, s: ReportStability | undefined): string
     const angle = (a: number | null): string => (a === null ? 'none within the heels worked' : `${short(a)}°`);
     parts.push(
       `<p>KG + FSM / displacement ${esc(textCell(r.kgEffective, 'm'))} m; GM0 ${esc(textCell(r.gm0, 'm'))} m; largest GZ ${esc(textCell(r.maxGz, 'm'))} m at ${esc(short(r.angleOfMaxGz))}°; ` +
-        `angle of vanishing stability ${esc(angle(r.vanishingAngle))}; downflooding angle ${esc(angle(r.downfloodingAngle))}; ${r.trim === 'free' ? 'free to trim' : 'at level trim'} as it heels.</p>`,
+        `angle of vanishing stability ${esc(angle(r.vanishingAngle))}; ${r.lollAngle === null ? '' : `angle of loll ${esc(angle(r.lollAngle))} (GM0 below zero); `}downflooding angle ${esc(angle(r.downfloodingAngle))}; ${r.trim === 'free' ? 'free to trim' : 'at level trim'} as it heels.</p>`,
     );
     const area = new Map(r.areas.map((a) => [a.heel, a.area]));
     parts.push(table(['Heel, °', 'GZ, m', 'Area to heel, m·rad'], r.points.map((q) => [short(q.heel), textCell(q.gz, 'm'), textCell(area.get(q.heel) ?? Number.NaN, 'm.rad')])));

@@ -2,9 +2,10 @@
  * The righting-lever (GZ) curve of a loading as SVG, with what a reader checks on it:
  * GM0 drawn as the slope of the curve at the origin (the tangent reaches GM0 at one
  * radian, 57.3°, where a vertical of height GM0 meets it), the largest GZ and its
- * angle, the angle of vanishing stability, the downflooding angle, the areas of the
- * criteria shaded (0° to 30°, and 30° to 40° or the downflooding angle if less), and the
- * criteria table with each verdict written in words as well as shown in colour.
+ * angle, the angle of vanishing stability, the angle of loll where GM0 is below zero,
+ * the downflooding angle, the areas of the criteria shaded (0° to 30°, and 30° to 40° or
+ * the downflooding angle if less), and the criteria table with each verdict written in
+ * words as well as shown in colour.
  *
  * GZ ≈ GM0 · φ near upright (φ in radians), so the tangent at the origin has slope GM0
  * per radian: common practice, e.g. E. C. Tupper, Introduction to Naval Architecture,
@@ -90,6 +91,14 @@ export function gzPlot(d: GzPlotData): string {
     marks.push(el('circle', { cx, cy, r: 4.5, fill: '#D55E00', 'data-role': 'max-gz' }));
     marks.push(text(cx, cy - 10, `largest GZ ${short(r.maxGz)} m at ${short(r.angleOfMaxGz)}°`, { 'text-anchor': 'middle', 'font-size': 11.5, fill: '#A8400A', 'font-weight': 600 }));
   }
+  const loll = r.lollAngle ?? null;
+  if (loll !== null && Number.isFinite(loll)) {
+    // Above the zero line and left of the mark: the curve is below the line there (GZ is
+    // negative up to the angle of loll), so the words never cross it.
+    const lx = f.sx(loll);
+    marks.push(el('circle', { cx: lx, cy: y0, r: 4, fill: 'none', stroke: INK.text, 'stroke-width': 1.5, 'data-role': 'loll' }));
+    marks.push(text(lx - 7, y0 - 8, `angle of loll ${short(loll)}°`, { 'text-anchor': 'end', 'font-size': 11, fill: INK.text }));
+  }
   const vanishing = r.vanishingAngle ?? null;
   if (vanishing !== null && Number.isFinite(vanishing)) {
     const vx = f.sx(vanishing);
@@ -114,7 +123,10 @@ export function gzPlot(d: GzPlotData): string {
       ? 'No criteria were checked.'
       : failed.length === 0
         ? `All ${r.criteria.length} criteria pass.`
-        : `${failed.length} of ${r.criteria.length} criteria FAIL: ${failed.map((c) => CRITERION_WORDS[c.id] ?? c.id).join('; ')}.`;
+        : // One is named in the heading; more would run past its line, and are marked below.
+          failed.length === 1
+          ? `${failed.length} of ${r.criteria.length} criteria FAIL: ${failed.map((c) => CRITERION_WORDS[c.id] ?? c.id).join('; ')}.`
+          : `${failed.length} of ${r.criteria.length} criteria FAIL, each marked below.`;
   rows.push(text(f.left, y, verdict, { 'font-size': 13, 'font-weight': 700, fill: failed.length === 0 ? INK.pass : INK.fail, 'data-role': 'verdict' }));
   for (const c of r.criteria) {
     y += 17;

@@ -21,7 +21,7 @@ export type CriterionVerdict = Omit<CriterionResult, 'id'> & { readonly id: stri
 
 /** The righting levers of a loading as a plot draws them. Angles in degrees, lengths in m. */
 export type GzCurve = Pick<GzResult, 'gm0' | 'maxGz' | 'angleOfMaxGz'> &
-  Partial<Pick<GzResult, 'vanishingAngle' | 'downfloodingAngle'>> & {
+  Partial<Pick<GzResult, 'vanishingAngle' | 'downfloodingAngle' | 'lollAngle'>> & {
     readonly points: readonly GzPoint[];
     readonly criteria: readonly CriterionVerdict[];
   };

@@ -171,6 +171,7 @@ export const GZ_FORM: AnswerForm<GzAnswer> = {
     maxGz: 'm',
     angleOfMaxGz: 'deg',
     vanishingAngle: 'deg',
+    lollAngle: 'deg',
     downfloodingAngle: 'deg',
   },
   columns: GZ_COLUMNS,
@@ -183,6 +184,13 @@ export const GZ_FORM: AnswerForm<GzAnswer> = {
       ...headLines(r, ctx),
       `loading: displacement ${ctx.n(r.displacement)} ${ctx.u('t')}; KG ${ctx.n(r.kg)} ${m}; free surface moment ${ctx.n(r.fsm)} ${ctx.u('t.m')}, so KG + FSM / displacement = ${b(r.kgEffective)} ${m}; ${r.trim === 'free' ? 'free to trim as it heels' : 'at level trim'}`,
       `GM0 ${b(r.gm0)} ${m}; largest GZ ${b(r.maxGz)} ${m} at ${angle(r.angleOfMaxGz, '-')}; angle of vanishing stability ${angle(r.vanishingAngle, 'beyond 180 deg')}; downflooding angle ${angle(r.downfloodingAngle, 'none (no opening given, or none reaches the water)')}`,
+      ...(r.gm0 < 0
+        ? [
+            r.lollAngle === null
+              ? `GM0 is below zero and GZ does not come back above zero: a vessel so loaded does not stay upright and finds no angle of loll within the curve worked`
+              : `GM0 is below zero: a vessel so loaded does not stay upright but lolls to ${angle(r.lollAngle, '-')}, where GZ rises through zero, to either side`,
+          ]
+        : []),
       `criteria: ${r.criteriaSet.name} (${r.criteriaSet.source}): ${passed} of ${r.criteria.length} met`,
       ...r.criteria.map((c) => verdictLine(c, ctx)),
     ];

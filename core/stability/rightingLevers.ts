@@ -66,6 +66,12 @@ export interface GzResult {
   readonly angleOfMaxGz: number;
   /** Degrees; 0 when GZ is not positive at any heel; null when GZ stays positive to 180 degrees. */
   readonly vanishingAngle: number | null;
+  /**
+   * The angle of loll, degrees: where GZ, negative from the upright (GM0 below zero),
+   * rises through zero again, the heel at which such a vessel comes to rest. Null when
+   * GZ is not negative past the upright, or never comes back above zero.
+   */
+  readonly lollAngle: number | null;
   /** Degrees; null without openings, or when none reaches the water by 180 degrees. */
   readonly downfloodingAngle: number | null;
   readonly criteriaSet: { readonly name: string; readonly source: string };
@@ -173,7 +179,7 @@ export function rightingLevers(p: PreparedHull, input: GzInput, density: number)
   const read = readCurve(grid, gzs, (a) => at(a).gz, downfloodingAngle);
   const criteriaSet = input.criteria ?? IMO_2008_GENERAL;
   const criteria = judge(criteriaSet, { ...read.actual, gm0 });
-  const { maxGz, angleOfMaxGz, vanishingAngle } = read;
+  const { maxGz, angleOfMaxGz, vanishingAngle, lollAngle } = read;
   const area = (to: number): number => areaUnder(grid, gzs, to) * RAD;
 
   // The points asked for, and the area to each.
@@ -192,6 +198,7 @@ export function rightingLevers(p: PreparedHull, input: GzInput, density: number)
     maxGz,
     angleOfMaxGz,
     vanishingAngle,
+    lollAngle,
     downfloodingAngle,
     criteriaSet: { name: criteriaSet.name, source: criteriaSet.source },
     criteria,
@@ -203,6 +210,7 @@ export interface CurveReading {
   readonly maxGz: number;
   readonly angleOfMaxGz: number;
   readonly vanishingAngle: number | null;
+  readonly lollAngle: number | null;
   readonly actual: Omit<Record<CriterionId, number>, 'gm0'>;
 }
 
@@ -210,8 +218,9 @@ export interface CurveReading {
  * Read a GZ curve given at heels `grid` (degrees, ascending from 0) with values `gzs`
  * (m): the largest GZ and its angle (the parabola through the largest value and its
  * neighbours), the angle of vanishing stability (past the largest value, where GZ goes
- * from positive to not; `gzAt` gives GZ between grid points, for the secant rule), and
- * the criteria's actual values: the areas to 30 and 40 degrees and from 30 to 40 (each
+ * from positive to not; `gzAt` gives GZ between grid points, for the secant rule), the
+ * angle of loll (before the largest value, where a GZ negative off the upright rises
+ * through zero), and the criteria's actual values: the areas to 30 and 40 degrees and from 30 to 40 (each
  * end at the downflooding angle if less), and the largest GZ at 30 degrees or more.
  */
 export function readCurve(grid: readonly number[], gzs: readonly number[], gzAt: (deg: number) => number, downfloodingAngle: number | null): CurveReading {
@@ -243,6 +252,16 @@ export function readCurve(grid: readonly number[], gzs: readonly number[], gzAt:
       }
     }
   }
+  // The angle of loll: GZ negative off the upright, rising through zero before its largest value.
+  let lollAngle: number | null = null;
+  if (gzs.length > 1 && gzs[1]! < 0 && maxGz > 0) {
+    for (let k = 1; k < kMax; k++) {
+      if (gzs[k]! < 0 && !(gzs[k + 1]! < 0)) {
+        lollAngle = secantRoot((a) => -gzAt(a), grid[k]!, grid[k + 1]!);
+        break;
+      }
+    }
+  }
   const limit = (deg: number): number => (downfloodingAngle !== null ? Math.min(deg, downfloodingAngle) : deg);
   const area = (from: number, to: number): number => (to > from ? areaUnder(grid, gzs, to) - areaUnder(grid, gzs, from) : 0) * RAD;
   let gzBeyond30 = -Infinity;
@@ -252,6 +271,7 @@ export function readCurve(grid: readonly number[], gzs: readonly number[], gzAt:
     maxGz,
     angleOfMaxGz,
     vanishingAngle,
+    lollAngle,
     actual: {
       'area-0-30': area(0, limit(30)),
       'area-0-40': area(0, limit(40)),

@@ -48,7 +48,7 @@ const UNIT_OF: Readonly<Record<string, string>> = {
   ap: 'm', fp: 'm', lbp: 'm', stations: '-', waterlines: '-', density: '-',
   displacement: 't', displacements: 't', lcg: 'm', tcg: 'm', kg: 'm', draftAft: 'm', draftFwd: 'm', trim: 'm', heel: '-', draft: 'm',
   lcb: 'm', tcb: 'm', vcb: 'm', volume: 'm3', longitudinal: 'm', transverse: 'm', kn: 'm',
-  fsm: 't.m', kgEffective: 'm', gm0: 'm', gm: 'm', gz: 'm', area: 'm.rad', maxGz: 'm', angleOfMaxGz: '-', vanishingAngle: '-', downfloodingAngle: '-',
+  fsm: 't.m', kgEffective: 'm', gm0: 'm', gm: 'm', gz: 'm', area: 'm.rad', maxGz: 'm', angleOfMaxGz: '-', vanishingAngle: '-', lollAngle: '-', downfloodingAngle: '-',
   waterplaneArea: 'm2', lcf: 'm', iT: 'm4', iL: 'm4', bmt: 'm', bml: 'm', kmt: 'm', kml: 'm', tpc: 't/cm', mct1cm: 't.m/cm',
   lwl: 'm', bwl: 'm', am: 'm2', wettedSurface: 'm2', cb: '-', cm: '-', cp: '-', cwp: '-',
 };

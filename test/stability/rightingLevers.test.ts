@@ -188,6 +188,23 @@ describe('the GZ curve of a loading', () => {
     expect(r.criteria.every((c) => typeof c.pass === 'boolean')).toBe(true);
   });
 
+  test('G a little above the metacentre: the box lolls to tan φ = √(-2 GM0 / BM), where the wall-sided GZ is zero', () => {
+    // GZ = sin φ (GM0 + ½ BM tan² φ) (the wall-sided formula; C. B. Barrass & D. R. Derrett,
+    // Ship Stability for Masters and Mates, 7th ed., 2012, from memory) is zero at
+    // tan² φ = -2 GM0 / BM. At KG 3.1 m: GM0 = 0.65 + 2.3077 - 3.1 = -0.142 m, a loll of
+    // about 19.3°, where the deck edge (2.7 m above the water) stays dry and the bilge wet.
+    const BM = (B * B) / (12 * T);
+    const kg = 3.1;
+    const r = rightingLevers(box, { displacement, kg }, rho);
+    const gm0 = T / 2 + BM - kg;
+    expect(r.gm0).toBeRelClose(gm0, 1e-6);
+    const loll = Math.atan(Math.sqrt((-2 * gm0) / BM)) / RAD;
+    expect(r.lollAngle!).toBeCloseTo(loll, 2);
+    // And no angle of loll where GM0 is above zero, or where GZ never comes back above zero.
+    expect(rightingLevers(box, { displacement, kg: 2 }, rho).lollAngle).toBeNull();
+    expect(read((deg) => -0.01 * Math.sin(deg * RAD)).lollAngle).toBeNull();
+  });
+
   test('bad loadings are clear errors: heels out of range, a load too heavy, an opening outside the hull', () => {
     expect(codeOf(() => rightingLevers(box, { displacement, kg: 2, heels: [10, 200] }, rho))).toMatch(/^HYD_ANGLE_RANGE \["heels",1\] heel 200 degrees is outside -180 to 180/);
     expect(codeOf(() => rightingLevers(box, { displacement: 1e6, kg: 2 }, rho))).toMatch(/^HYD_LOAD_OUT_OF_RANGE \["displacement"\]/);
