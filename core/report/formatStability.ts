@@ -183,7 +183,7 @@ export const GZ_FORM: AnswerForm<GzAnswer> = {
     return [
       ...headLines(r, ctx),
       `loading: displacement ${ctx.n(r.displacement)} ${ctx.u('t')}; KG ${ctx.n(r.kg)} ${m}; free surface moment ${ctx.n(r.fsm)} ${ctx.u('t.m')}, so KG + FSM / displacement = ${b(r.kgEffective)} ${m}; ${r.trim === 'free' ? 'free to trim as it heels' : 'at level trim'}`,
-      `GM0 ${b(r.gm0)} ${m}; largest GZ ${b(r.maxGz)} ${m} at ${angle(r.angleOfMaxGz, '-')}; angle of vanishing stability ${angle(r.vanishingAngle, 'beyond 180 deg')}; downflooding angle ${angle(r.downfloodingAngle, 'none (no opening given, or none reaches the water)')}`,
+      `GM0 ${b(r.gm0)} ${m}; ${r.maxGz > 0 ? `largest GZ ${b(r.maxGz)} ${m} at ${angle(r.angleOfMaxGz, '-')}` : `no GZ above zero (its largest, ${b(r.maxGz)} ${m}, at ${angle(r.angleOfMaxGz, '-')})`}; angle of vanishing stability ${angle(r.vanishingAngle, 'beyond 180 deg')}; downflooding angle ${angle(r.downfloodingAngle, 'none (no opening given, or none reaches the water)')}`,
       ...(r.gm0 < 0
         ? [
             r.lollAngle === null
