@@ -88,7 +88,11 @@ beforeAll(async () => {
   // Its failure is the letter test's to report, not an unhandled rejection meanwhile.
   letterPdf.catch(() => undefined);
   mkdirSync(ARTEFACTS, { recursive: true });
-  app = await buildApp();
+  // Every computation on the request thread: the page only shows what the API answers,
+  // and a worker thread would cost its start and the job code's loading (several hundred
+  // ms of CPU) for the one cross-curves plot the demo workboat's page asks for. The
+  // worker threads give the same answers (test/server/workerThreads.test.ts).
+  app = await buildApp({ limits: { inlineWork: Number.POSITIVE_INFINITY } });
   preloadDemo(app.halfbreadth.store, join(ROOT, 'offsets-demo'));
   base = await app.listen({ port: 0, host: '127.0.0.1' });
   // A small hull for the tests that need a page shown but not a particular hull.
