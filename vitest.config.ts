@@ -3,12 +3,13 @@ import { BaseSequencer, type TestSpecification } from 'vitest/node';
 import { defineConfig } from 'vitest/config';
 
 /**
- * Test files that run longest, started first and in this order, each on whichever worker
- * is free: the browser file (mostly waiting on Chromium, which uses the other core), the
- * store's SIGKILL rounds (twenty of them in CI, mostly waiting on its writer), then the
- * rest of the long ones. Started last, any of them would run alone at the end with the
- * other worker idle. The list is read the same way in a clean clone (no results cache)
- * and in a working copy; the other files follow in vitest's own order.
+ * Test files that run longest, or mostly wait, started first and in this order, each on
+ * whichever worker is free: the browser file (mostly waiting on Chromium, which uses the
+ * other core), the store's SIGKILL rounds (twenty of them in CI, mostly waiting on its
+ * writer), then the rest of the long ones, and the socket timeouts (1.3 s of waiting).
+ * Started last, any of them would run alone at the end with the other worker idle. The
+ * list is read the same way in a clean clone (no results cache) and in a working copy;
+ * the other files follow in vitest's own order.
  */
 const LONG_FIRST = [
   'test/browser/page.test.ts',
@@ -19,6 +20,7 @@ const LONG_FIRST = [
   'test/server/e2e.test.ts',
   'test/server/workerThreads.test.ts',
   'test/cli/limits.test.ts',
+  'test/server/protocol.test.ts',
 ];
 
 /**
