@@ -3,15 +3,43 @@ import { BaseSequencer, type TestSpecification } from 'vitest/node';
 import { defineConfig } from 'vitest/config';
 
 /**
- * The browser tests first: one file drives a browser for several seconds, and started
- * first it runs on one worker while the other works through the rest, instead of
- * starting last and running alone. Otherwise vitest's own order (failed, then longest).
+ * Test files that run longest, or mostly wait, started first and in this order, each on
+ * whichever worker is free: the browser file (mostly waiting on Chromium, which uses the
+ * other core), the store's SIGKILL rounds (twenty of them in CI, mostly waiting on its
+ * writer), then the rest of the long ones, and the socket timeouts (1.3 s of waiting).
+ * Started last, any of them would run alone at the end with the other worker idle. The
+ * list is read the same way in a clean clone (no results cache) and in a working copy;
+ * the other files follow in vitest's own order.
  */
-class BrowserFirst extends BaseSequencer {
+const LONG_FIRST = [
+  'test/browser/page.test.ts',
+  'test/server/durability.test.ts',
+  'test/server/mutatedCorpus.test.ts',
+  'test/server/badRequests.test.ts',
+  'test/cli/cli.test.ts',
+  'test/server/e2e.test.ts',
+  'test/server/workerThreads.test.ts',
+  'test/cli/limits.test.ts',
+  'test/server/protocol.test.ts',
+];
+
+/**
+ * vitest's order (a project's group, then failed files, then the longest by the results
+ * cache, else the largest), with LONG_FIRST moved to the front of its group. It must be
+ * the root config's sequencer: the pool reads only that one, not a project's.
+ */
+class LongFirst extends BaseSequencer {
   override async sort(files: TestSpecification[]): Promise<TestSpecification[]> {
     const sorted = await super.sort(files);
-    const browser = (f: TestSpecification): boolean => /[\\/]test[\\/]browser[\\/]/.test(f.moduleId);
-    return [...sorted.filter(browser), ...sorted.filter((f) => !browser(f))];
+    const rank = (f: TestSpecification): number => {
+      const at = LONG_FIRST.findIndex((p) => f.moduleId.replaceAll('\\', '/').endsWith(p));
+      return at < 0 ? LONG_FIRST.length : at;
+    };
+    const group = (f: TestSpecification): number => f.project.config.sequence.groupOrder;
+    return sorted
+      .map((f, k) => ({ f, k }))
+      .sort((a, b) => group(a.f) - group(b.f) || rank(a.f) - rank(b.f) || a.k - b.k)
+      .map(({ f }) => f);
   }
 }
 
@@ -31,10 +59,11 @@ export default defineConfig({
     // that another file left behind (DEVELOPERS.md, "Tests").
     maxWorkers: Math.max(2, availableParallelism()),
     isolate: false,
+    sequence: { sequencer: LongFirst },
     projects: [
       {
         extends: true,
-        test: { name: 'main', include: ['test/**/*.test.ts'], exclude: ['**/node_modules/**', ...TIMED], sequence: { sequencer: BrowserFirst, groupOrder: 0 } },
+        test: { name: 'main', include: ['test/**/*.test.ts'], exclude: ['**/node_modules/**', ...TIMED], sequence: { groupOrder: 0 } },
       },
       // Files that bound a response time run last and alone, once every other file is
       // done: a browser or a corpus on the other core would measure the machine, not the

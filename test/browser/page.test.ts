@@ -1,9 +1,13 @@
 /// <reference lib="dom" />
 /// <reference lib="dom.iterable" />
 /**
- * The page at / and the printed report in a real browser: Debian's Chromium
- * (/usr/bin/chromium, installed by .ci/run when missing; never a downloaded build)
- * driven by playwright-core, one browser for the whole file, with a fresh profile.
+ * The page at / and the printed report in a real browser, Debian's Chromium (installed
+ * by .ci/run when missing; never a downloaded build). The page is driven by
+ * playwright-core in Debian's chromium-headless-shell, the same Chromium without the
+ * desktop browser around it (about half the CPU of /usr/bin/chromium for the same pages),
+ * or in /usr/bin/chromium where that package is not installed: one browser for the whole
+ * file, with a fresh profile. `halfbreadth report --pdf` prints with /usr/bin/chromium,
+ * the browser it finds on a user's machine.
  *
  * What is checked, and against what:
  * - the volume the page shows at a draft is the API's (the same service answers both;
@@ -20,7 +24,7 @@
  *   ISO 216 A4 (210 x 297 mm = 595.3 x 841.9 pt) or ANSI letter (8.5 x 11 in = 612 x 792 pt).
  * Screenshots at 1280 and 390 px are saved under test-artifacts/ to be looked at.
  */
-import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -36,6 +40,13 @@ import { preloadDemo } from '../../server/preloadDemo.js';
 import { boxCsv } from '../fixtures/serverHelpers.js';
 
 const CHROMIUM = '/usr/bin/chromium';
+/**
+ * The browser the page is driven in: the headless shell's program itself (Debian's
+ * /usr/bin/chromium-headless-shell is a shell script that does not exec it, so a browser
+ * stopped through the script would outlive it), else the full Chromium.
+ */
+const HEADLESS_SHELL = '/usr/lib/chromium/chromium-headless-shell';
+const PAGE_BROWSER = existsSync(HEADLESS_SHELL) ? HEADLESS_SHELL : CHROMIUM;
 /** The opening words of the caution, without white space. */
 const CAUTION_START = CAUTION.slice(0, 60).replace(/\s+/g, '');
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
@@ -77,7 +88,11 @@ beforeAll(async () => {
   // Its failure is the letter test's to report, not an unhandled rejection meanwhile.
   letterPdf.catch(() => undefined);
   mkdirSync(ARTEFACTS, { recursive: true });
-  app = await buildApp();
+  // Every computation on the request thread: the page only shows what the API answers,
+  // and a worker thread would cost its start and the job code's loading (several hundred
+  // ms of CPU) for the one cross-curves plot the demo workboat's page asks for. The
+  // worker threads give the same answers (test/server/workerThreads.test.ts).
+  app = await buildApp({ limits: { inlineWork: Number.POSITIVE_INFINITY } });
   preloadDemo(app.halfbreadth.store, join(ROOT, 'offsets-demo'));
   base = await app.listen({ port: 0, host: '127.0.0.1' });
   // A small hull for the tests that need a page shown but not a particular hull.
@@ -86,9 +101,10 @@ beforeAll(async () => {
   profile = mkdtempSync(join(tmpdir(), 'halfbreadth-browser-'));
   // Signals are the test runner's to handle: playwright-core is not to install handlers of its own in this worker.
   context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
+    executablePath: PAGE_BROWSER,
     headless: true,
-    args: [...BROWSER_FLAGS],
+    // The headless shell is headless only and takes no --headless=new.
+    args: PAGE_BROWSER === CHROMIUM ? [...BROWSER_FLAGS] : BROWSER_FLAGS.filter((f) => !f.startsWith('--headless')),
     viewport: { width: 1280, height: 900 },
     acceptDownloads: true,
     handleSIGINT: false,
