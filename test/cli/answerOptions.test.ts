@@ -11,23 +11,11 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, test } from 'vitest';
 import { CAUTION } from '../../core/common/caution.js';
-import type { CliIo } from '../../cli/io.js';
-import { main } from '../../cli/main.js';
 import { boxCsv } from '../fixtures/serverHelpers.js';
+import { runCli } from '../helpers/runCli.js';
 
-async function run(argv: string[], files: Record<string, string> = {}, tty = false): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: CliIo = {
-    stdout: { write: (t: string) => (out += t), isTTY: tty },
-    stderr: { write: (t: string) => (err += t), isTTY: false },
-    readStdin: async () => new Uint8Array(),
-    readFile: async (p: string) => (files[p] === undefined ? readFileSync(p) : new TextEncoder().encode(files[p])),
-    env: {},
-  };
-  const code = await main(argv, io);
-  return { code, out, err };
-}
+/** The command line in-process (test/helpers/runCli.ts); stdout a terminal when `tty`. */
+const run = (argv: string[], files: Record<string, string> = {}, tty = false) => runCli(argv, { files, ttyOut: tty });
 
 const BOX = { 'box.csv': boxCsv('test box', 10, 4, 2) };
 const DATUM = "x and every position along the length are measured from the offsets' origin (positive forward): AP at x = 0 m; amidships at x = 5 m; FP at x = 10 m; LBP 10 m; 11 stations";

@@ -14,24 +14,13 @@ import { CAUTION } from '../../core/common/caution.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { findHullPlot, HULL_PLOTS } from '../../core/plots/plotCatalogue.js';
-import type { CliIo } from '../../cli/io.js';
-import { main } from '../../cli/main.js';
 import { parseSvg } from '../helpers/svgRead.js';
+import { runCli } from '../helpers/runCli.js';
 
 const WORKBOAT = fileURLToPath(new URL('../../offsets-demo/workboat.csv', import.meta.url));
 
-async function run(argv: string[], env: Record<string, string> = {}): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: CliIo = {
-    stdout: { write: (t: string) => (out += t), isTTY: false },
-    stderr: { write: (t: string) => (err += t), isTTY: false },
-    readStdin: async () => new Uint8Array(),
-    readFile: async (p: string) => readFileSync(p),
-    env,
-  };
-  return { code: await main(argv, io), out, err };
-}
+/** The command line in-process (test/helpers/runCli.ts), with the environment given. */
+const run = (argv: string[], env: Record<string, string> = {}) => runCli(argv, { env });
 
 describe('plot', () => {
   test('writes the core\'s SVG of each plot of the file', async () => {

@@ -16,27 +16,15 @@ import { calculationSheet } from '../../core/upright/calculationSheet.js';
 import { hydrostaticsAt } from '../../core/upright/hydrostatics.js';
 import { prepareHull } from '../../core/hull/preparedHull.js';
 import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
-import type { CliIo } from '../../cli/io.js';
-import { main } from '../../cli/main.js';
 import '../helpers/relClose.js';
+import { runCli } from '../helpers/runCli.js';
 
 const demo = (name: string): string => fileURLToPath(new URL(`../../offsets-demo/${name}`, import.meta.url));
 const WORKBOAT = demo('workboat.csv');
 const LAUNCH = demo('survey-launch.csv');
 
-async function run(argv: string[], files: Record<string, string> = {}): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: CliIo = {
-    stdout: { write: (t: string) => (out += t), isTTY: false },
-    stderr: { write: (t: string) => (err += t), isTTY: false },
-    readStdin: async () => new Uint8Array(),
-    readFile: async (p: string) => (files[p] === undefined ? readFileSync(p) : new TextEncoder().encode(files[p])),
-    env: {},
-  };
-  const code = await main(argv, io);
-  return { code, out, err };
-}
+/** The command line in-process (test/helpers/runCli.ts). */
+const run = (argv: string[], files: Record<string, string> = {}) => runCli(argv, { files });
 
 const prepared = (file: string) => prepareHull(readOffsetsCsv(readFileSync(file, 'utf8')).hull);
 /** Twice the greatest half-breadth of a demo file, read from its cells. */

@@ -19,6 +19,8 @@ export interface FakeStreams {
   readonly ttyErr?: boolean;
   readonly stdin?: string;
   readonly files?: Readonly<Record<string, string>>;
+  /** The environment the command sees (none by default). */
+  readonly env?: Readonly<Record<string, string>>;
 }
 
 export async function runCli(argv: readonly string[], o: FakeStreams = {}): Promise<CliRun> {
@@ -32,7 +34,7 @@ export async function runCli(argv: readonly string[], o: FakeStreams = {}): Prom
       const given = o.files?.[p];
       return given === undefined ? readFileSync(p) : new TextEncoder().encode(given);
     },
-    env: {},
+    env: { ...o.env },
   };
   const code = await main(argv, io);
   return { code, out, err };

@@ -14,11 +14,10 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import type { CliIo } from '../../cli/io.js';
-import { main } from '../../cli/main.js';
 import { buildApp } from '../../server/app.js';
 import { csvHeaders } from '../fixtures/serverHelpers.js';
 import { relativeError } from '../helpers/relClose.js';
+import { runCli } from '../helpers/runCli.js';
 
 const FOOT = 0.3048;
 const LONG_TON = 1.0160469088;
@@ -82,16 +81,7 @@ const WORKBOAT = fileURLToPath(new URL('../../offsets-demo/workboat.csv', import
 const WORKBOAT_TEXT = readFileSync(WORKBOAT, 'utf8');
 
 async function cli(argv: string[]): Promise<unknown> {
-  let out = '';
-  let err = '';
-  const io: CliIo = {
-    stdout: { write: (t: string) => (out += t), isTTY: false },
-    stderr: { write: (t: string) => (err += t), isTTY: false },
-    readStdin: async () => new Uint8Array(),
-    readFile: async (p: string) => readFileSync(p),
-    env: {},
-  };
-  const code = await main(argv, io);
+  const { code, out, err } = await runCli(argv);
   expect(code, err).toBe(0);
   return JSON.parse(out);
 }
