@@ -339,7 +339,7 @@ async function showLoading() {
   }
   const pairs = [
     ['KG with free surface', `${cell(gz.kgEffective, 'm')} m (KG ${cell(gz.kg, 'm')} m + FSM / displacement)`],
-    ['GM0', `${cell(gz.gm0, 'm')} m`],
+    ['GM0', `${cell(gz.gm0, 'm')} m (KMt at the level draft of the displacement − KG with free surface, as the criteria take it)`],
     ['Largest GZ', `${cell(gz.maxGz, 'm')} m at ${gz.angleOfMaxGz.toFixed(1)}°`],
     ['Angle of vanishing stability', gz.vanishingAngle === null ? 'beyond the curve worked' : `${gz.vanishingAngle.toFixed(1)}°`],
   ];
@@ -347,7 +347,7 @@ async function showLoading() {
   if (floated !== null) {
     pairs.unshift(['Floats at', `draft aft ${cell(floated.draftAft, 'm')} m, forward ${cell(floated.draftFwd, 'm')} m, trim ${cell(floated.trim, 'm')} m by the ${floated.trim >= 0 ? 'stern' : 'head'}`]);
     if (floated.stable === false) {
-      pairs.splice(1, 0, ['Unstable upright', `GM at that balance is ${cell(floated.gm, 'm')} m: the vessel would not rest there but loll or capsize; read the GZ curve below`]);
+      pairs.splice(1, 0, ['Unstable upright', `GM at that balance, at its trim and without free surface, is ${cell(floated.gm, 'm')} m: the vessel would not rest there but loll or capsize; read the GZ curve below`]);
     }
   }
   facts($('loading-results'), pairs);

@@ -89,7 +89,9 @@ export function gzPlot(d: GzPlotData): string {
     const cx = f.sx(r.angleOfMaxGz);
     const cy = f.sy(r.maxGz);
     marks.push(el('circle', { cx, cy, r: 4.5, fill: '#D55E00', 'data-role': 'max-gz' }));
-    marks.push(text(cx, cy - 10, `largest GZ ${short(r.maxGz)} m at ${short(r.angleOfMaxGz)}°`, { 'text-anchor': 'middle', 'font-size': 11.5, fill: '#A8400A', 'font-weight': 600 }));
+    // Centred over the mark, or from it inward near either end, so the words stay inside the figure.
+    const anchor = cx < f.left + 0.2 * (f.right - f.left) ? 'start' : cx > f.right - 0.2 * (f.right - f.left) ? 'end' : 'middle';
+    marks.push(text(anchor === 'start' ? cx - 6 : anchor === 'end' ? cx + 6 : cx, cy - 10, `largest GZ ${short(r.maxGz)} m at ${short(r.angleOfMaxGz)}°`, { 'text-anchor': anchor, 'font-size': 11.5, fill: '#A8400A', 'font-weight': 600 }));
   }
   const loll = r.lollAngle ?? null;
   if (loll !== null && Number.isFinite(loll)) {
