@@ -107,6 +107,21 @@ describe('the stability of the balance: GM there, the slope of GZ', () => {
     expect(fp.stable).toBe(true);
   });
 
+  test.each([
+    ['the demo workboat (transom, raked stem, half stations)', 'workboat.csv', 1.4],
+    ['the demo survey launch (transom, chine knuckles, forefoot)', 'survey-launch.csv', 0.6],
+  ] as const)('%s floated level with G at LCB: GM at the balance is KMt - KG of the upright table to 1e-5', (_name, file, draft) => {
+    // GM = KMt - KG for an upright, level balance (E. C. Tupper, Introduction to Naval
+    // Architecture, 5th ed., 2013, ch. 4, from memory); the upright table is held to closed
+    // forms in test/upright/. The slope of GZ by differences must meet it on real shapes.
+    const hull = prepareHull(demo(file));
+    const h = hydrostaticsAt(hull, draft, rho);
+    const kg = h.vcb;
+    const fp = floatingPosition(hull, { displacement: h.displacement, lcg: h.lcb, kg }, rho);
+    expect(Math.abs(fp.trim)).toBeLessThan(1e-6);
+    expect(fp.gm!).toBeRelClose(h.kmt - kg, 1e-5);
+  });
+
   test('without a KG the height of G is unknown, and so is the stability', () => {
     const fp = floatingPosition(p, { displacement, lcg: L / 2 }, rho);
     expect(fp.gm).toBeNull();
