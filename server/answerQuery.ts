@@ -11,7 +11,7 @@ import { z } from 'zod';
 import { UNIT_SYSTEMS, LENGTH_UNITS, type LengthUnit, type UnitSystem } from '../core/common/units.js';
 import { DEFAULT_DIGITS, DIGITS_RANGE, readDigits, readFields, type OutputOptions } from '../core/report/outputOptions.js';
 import { FormatQuery, type Format } from './requestFields.js';
-import { addCoreIssues } from './validate.js';
+import { coreRule } from './validate.js';
 
 /** `units=imperial`: the answer's unit system, and that of the lengths typed in the request. */
 export const UnitsQuery = z
@@ -25,14 +25,7 @@ export const UnitsQuery = z
 /** `fields=displacement,wettedSurface`: the table's columns, in this order. */
 export const FieldsQuery = z
   .string({ error: 'fields must be given once' })
-  .transform((text, ctx) => {
-    try {
-      return readFields(text, 'fields');
-    } catch (e) {
-      addCoreIssues(e, ctx, text);
-      return z.NEVER;
-    }
-  })
+  .transform((text, ctx) => coreRule(ctx, text, () => readFields(text, 'fields')))
   .optional()
   .describe('the columns of the table, comma-separated, in the order wanted (names as in the JSON rows, e.g. displacement,wettedSurface); all by default')
   .meta({ examples: ['displacement,wettedSurface'] });
@@ -40,14 +33,7 @@ export const FieldsQuery = z
 /** `digits=6`: significant digits of every number. */
 export const DigitsQuery = z
   .string({ error: 'digits must be given once' })
-  .transform((text, ctx) => {
-    try {
-      return readDigits(text, 'digits');
-    } catch (e) {
-      addCoreIssues(e, ctx, text);
-      return z.NEVER;
-    }
-  })
+  .transform((text, ctx) => coreRule(ctx, text, () => readDigits(text, 'digits')))
   .optional()
   .describe(`significant digits of every number of the answer, ${DIGITS_RANGE.min} to ${DIGITS_RANGE.max} (default ${DEFAULT_DIGITS}; ${DIGITS_RANGE.max} gives the full double)`);
 

@@ -15,7 +15,7 @@ import type { UnitSystem } from '../core/common/units.js';
 import { LIMITS } from '../core/common/limits.js';
 import { SERVICE_LIMITS } from './serviceLimits.js';
 import { STABILITY_IMPERIAL_FORMS } from './stabilityFields.js';
-import { addCoreIssues, type FieldCodes } from './validate.js';
+import { coreRule, type FieldCodes } from './validate.js';
 
 /** Codes of issues on each field, for issues zod raises itself (a wrong type, a missing field). */
 export const FIELD_CODES: FieldCodes = {
@@ -38,14 +38,7 @@ export function draftsQuery(system: UnitSystem) {
   return z
     .string({ error: (iss) => (iss.input === undefined ? `drafts is required; ${hint}` : `drafts must be given once; ${hint}`) })
     .max(SERVICE_LIMITS.maxDraftsText, { error: `the drafts text is longer than ${SERVICE_LIMITS.maxDraftsText} characters; use ranges from:step:to` })
-    .transform((text, ctx) => {
-      try {
-        return parseDraftList(text, ['drafts'], system);
-      } catch (e) {
-        addCoreIssues(e, ctx, text);
-        return z.NEVER;
-      }
-    })
+    .transform((text, ctx) => coreRule(ctx, text, () => parseDraftList(text, ['drafts'], system)))
     .describe(`drafts, ${UNIT_WORD[system]}: comma-separated values and inclusive ranges from:step:to, at most ${LIMITS.maxDrafts} in all${system === 'si' ? '; with units=imperial in feet, decimal or feet-inches-eighths (2-6-0, 3-4-5+, 3-4-5-)' : ''}`)
     .meta({ examples: ['0.2:0.1:1.2,1.25'] });
 }
@@ -170,14 +163,7 @@ const inFeet = new WeakMap<z.ZodObject, z.ZodObject>();
 const DENSITY_TEXT = `water density, t/m3, ${DENSITY_RANGE.min} to ${DENSITY_RANGE.max} (default ${SEA_WATER_DENSITY}, sea water)`;
 
 /** The density rule of core (core/common/density.ts) as a zod refinement. */
-const densityRule = (value: number, ctx: z.RefinementCtx, written?: string): number => {
-  try {
-    return checkDensity(value, ['density'], written);
-  } catch (e) {
-    addCoreIssues(e, ctx, value);
-    return z.NEVER;
-  }
-};
+const densityRule = (value: number, ctx: z.RefinementCtx, written?: string): number => coreRule(ctx, value, () => checkDensity(value, ['density'], written));
 
 /** `density=1.025` in a query; a plain decimal number. */
 export const DensityQuery = z

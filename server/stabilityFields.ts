@@ -14,7 +14,7 @@ import type { UnitSystem } from '../core/common/units.js';
 import { CriteriaSetSchema, readCriteriaSet, type CriteriaSet } from '../core/stability/criteria.js';
 import { checkHeels, HEEL_RANGE, parseDisplacements, parseHeels, parseOpenings } from '../core/stability/stabilityInput.js';
 import type { Opening } from '../core/stability/rightingLevers.js';
-import { addCoreIssues } from './validate.js';
+import { coreRule } from './validate.js';
 
 /** Longest text of a typed list or criteria set in a query, characters. */
 const MAX_LIST_TEXT = 4_000;
@@ -22,16 +22,6 @@ const MAX_LIST_TEXT = 4_000;
 const MASS: Readonly<Record<UnitSystem, string>> = { si: 't', imperial: 'long tons (units=imperial)' };
 const LENGTH: Readonly<Record<UnitSystem, string>> = { si: 'm', imperial: 'ft (units=imperial)' };
 const MOMENT: Readonly<Record<UnitSystem, string>> = { si: 't.m', imperial: 'long ton-feet (units=imperial)' };
-
-/** A core rule run inside a zod transform: its issues keep their codes. */
-function coreRule<T>(ctx: z.RefinementCtx, input: unknown, f: () => T): T {
-  try {
-    return f();
-  } catch (e) {
-    addCoreIssues(e, ctx, input);
-    return z.NEVER;
-  }
-}
 
 const once = (name: string, hint: string) => (iss: { input?: unknown }) => (iss.input === undefined ? `${name} is required; ${hint}` : `${name} must be given once; ${hint}`);
 

@@ -3,7 +3,7 @@
  * (z.infer) and the OpenAPI document. Failures become a HalfbreadthError carrying
  * every issue, each with the path of the field and a code from core's catalogue.
  */
-import type { z } from 'zod';
+import { z } from 'zod';
 import { ERROR_CODES, HalfbreadthError, issue, type ErrorCode, type Issue } from '../core/common/errors.js';
 import { pathText } from '../core/offsets/readHullJson.js';
 
@@ -57,5 +57,15 @@ export function addCoreIssues(e: unknown, ctx: z.RefinementCtx, input: unknown):
   if (!(e instanceof HalfbreadthError)) throw e;
   for (const i of e.issues) {
     ctx.addIssue({ code: 'custom', message: i.message, path: i.path.slice(1), input, params: { code: i.code } });
+  }
+}
+
+/** A core rule run inside a zod transform: its value, or its issues passed on with their codes (addCoreIssues). */
+export function coreRule<T>(ctx: z.RefinementCtx, input: unknown, f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    addCoreIssues(e, ctx, input);
+    return z.NEVER;
   }
 }
