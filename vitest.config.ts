@@ -3,6 +3,20 @@ import { BaseSequencer, type TestSpecification } from 'vitest/node';
 import { defineConfig } from 'vitest/config';
 
 /**
+ * The test files that load mathjs (imperial units: about 1.3 s of CPU to import, once
+ * per worker), one after the other so that one worker loads it: they run beside the
+ * browser file, which takes longer than all of them together.
+ */
+const MATHJS_USERS = [
+  'test/common/units.test.ts',
+  'test/report/imperial.test.ts',
+  'test/server/stabilityForms.test.ts',
+  'test/server/imperialEverywhere.test.ts',
+  'test/server/answerShaping.test.ts',
+  'test/cli/sheetCommands.test.ts',
+];
+
+/**
  * Test files that run longest, or mostly wait, started first and in this order, each on
  * whichever worker is free: the browser file (mostly waiting on Chromium, which uses the
  * other core), the store's SIGKILL rounds (twenty of them in CI, mostly waiting on its
@@ -15,6 +29,7 @@ import { defineConfig } from 'vitest/config';
 const LONG_FIRST = [
   'test/browser/page.test.ts',
   'test/server/durability.test.ts',
+  ...MATHJS_USERS,
   'test/server/mutatedCorpus.test.ts',
   'test/server/badRequests.test.ts',
   'test/cli/cli.test.ts',
