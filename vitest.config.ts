@@ -20,11 +20,11 @@ const MATHJS_USERS = [
  * Test files that run longest, or mostly wait, started first and in this order, each on
  * whichever worker is free: the browser file (mostly waiting on Chromium, which uses the
  * other core), the store's SIGKILL rounds (twenty of them in CI, mostly waiting on its
- * writer), then the rest of the long ones, the socket timeouts (1.3 s of waiting) and the
- * free-loop bound (a service process and a heavy check). Started last, any of them would
- * run alone at the end with the other worker idle. The list is read the same way in a
- * clean clone (no results cache) and in a working copy; the other files follow in
- * vitest's own order.
+ * writer), the files that load mathjs (above), then the rest of the long ones, the
+ * socket timeouts (1.3 s of waiting) and the free-loop bound (a service process and a
+ * heavy check). Started last, any of them would run alone at the end with the other
+ * worker idle. The list is read the same way in a clean clone (no results cache) and in
+ * a working copy; the other files follow in vitest's own order.
  */
 const LONG_FIRST = [
   'test/browser/page.test.ts',
