@@ -10,14 +10,24 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 
-/** Where a browser is looked for, in order, after the HALFBREADTH_BROWSER variable. */
-export const BROWSER_PATHS = ['/usr/bin/chromium', '/usr/bin/chromium-browser', '/usr/bin/google-chrome', '/usr/bin/google-chrome-stable'] as const;
+/**
+ * Where a browser is looked for, in order, after the HALFBREADTH_BROWSER variable. First
+ * Debian's chromium-headless-shell (the same Chromium without the desktop browser around
+ * it: the demo report prints in about 1 s against nearly 3 s, with less than half the CPU,
+ * to the same pages), by its program itself: its /usr/bin/chromium-headless-shell is a
+ * script that runs the program as a child, which a timeout would not stop. Then a full
+ * Chromium or Chrome. Both take the same flags (the shell, headless only, ignores
+ * --headless=new).
+ */
+export const BROWSER_PATHS = [
+  '/usr/lib/chromium/chromium-headless-shell', '/usr/bin/chromium', '/usr/bin/chromium-browser', '/usr/bin/google-chrome', '/usr/bin/google-chrome-stable',
+] as const;
 
 /** What to tell a person when no browser is found. */
 export const INSTALL_BROWSER =
   'printing to PDF needs Chromium, and none was found (looked for HALFBREADTH_BROWSER, then ' +
-  `${BROWSER_PATHS.join(', ')}). On Debian or Ubuntu install it with: sudo apt-get install -y chromium ` +
-  '(or set HALFBREADTH_BROWSER to a Chromium or Chrome program). Without --pdf the report is written as HTML, which any browser prints.';
+  `${BROWSER_PATHS.join(', ')}). On Debian install it with: sudo apt-get install -y chromium-headless-shell ` +
+  '(or chromium, or set HALFBREADTH_BROWSER to a Chromium or Chrome program). Without --pdf the report is written as HTML, which any browser prints.';
 
 export function findBrowser(env: Readonly<Record<string, string | undefined>>): string | undefined {
   const own = env['HALFBREADTH_BROWSER'];

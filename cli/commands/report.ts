@@ -56,7 +56,8 @@ Options:
   --paper <size>      a4 (default) or letter
   --pdf <out.pdf>     print the report to this PDF file instead, with the Chromium
                       installed on this machine (HALFBREADTH_BROWSER, else
-                      /usr/bin/chromium); nothing is written on standard output
+                      Debian's chromium-headless-shell, else /usr/bin/chromium);
+                      nothing is written on standard output
   --drafts <list>     drafts of the hydrostatic table, m (default: about twenty
                       round drafts from the keel to the lowest deck edge)
   --draft <m>         draft of the sectional-area curve (default: the middle

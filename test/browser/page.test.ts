@@ -6,8 +6,8 @@
  * playwright-core in Debian's chromium-headless-shell, the same Chromium without the
  * desktop browser around it (about half the CPU of /usr/bin/chromium for the same pages),
  * or in /usr/bin/chromium where that package is not installed: one browser for the whole
- * file, with a fresh profile. `halfbreadth report --pdf` prints with /usr/bin/chromium,
- * the browser it finds on a user's machine.
+ * file, with a fresh profile. `halfbreadth report --pdf` prints with the browser it finds
+ * itself, as on a user's machine (the same shell, first in its list).
  *
  * What is checked, and against what:
  * - the volume the page shows at a draft is the API's (the same service answers both;
@@ -73,7 +73,7 @@ async function printLetterPdf(): Promise<{ code: number; err: string; pdf: Uint8
       stderr: { write: (t: string) => (err += t), isTTY: false },
       readStdin: async () => new Uint8Array(),
       readFile: async (p: string) => readFileSync(p),
-      env: { HALFBREADTH_BROWSER: CHROMIUM },
+      env: {},
     };
     const code = await main(['report', join(ROOT, 'offsets-demo', 'survey-launch.csv'), '--paper', 'letter', '--pdf', out], io);
     return { code, err, pdf: code === 0 ? new Uint8Array(readFileSync(out)) : new Uint8Array() };
