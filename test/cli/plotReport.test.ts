@@ -62,6 +62,6 @@ describe('report', () => {
     const r = await run(['report', WORKBOAT, '--pdf', '/tmp/never-written.pdf'], { HALFBREADTH_BROWSER: '/nonexistent/chromium' });
     expect(r.code).toBe(3);
     expect(r.out).toBe('');
-    expect(r.err).toContain('apt-get install -y chromium-headless-shell');
+    expect(r.err).toContain('apt-get install -y chromium');
   });
 });
