@@ -93,18 +93,15 @@ const POW10 = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
 export function roundNumber(v: number, digits: number): number {
   if (!Number.isFinite(v) || v === 0) return v;
   const a = Math.abs(v);
-  let e = Math.floor(Math.log10(a));
-  const k = digits - 1 - e;
+  const k = digits - 1 - Math.floor(Math.log10(a));
   if (digits <= 15 && k >= 0 && k <= 22) {
     // log10 may be off by one next to a power of ten: the scaled value must have `digits` digits.
     let scaled = a * POW10[k]!;
     let kk = k;
     if (scaled >= POW10[digits]!) {
-      e++;
       kk--;
       scaled = a * POW10[kk]!;
     } else if (scaled < POW10[digits - 1]!) {
-      e--;
       kk++;
       if (kk > 22) return Number(v.toPrecision(digits));
       scaled = a * POW10[kk]!;

@@ -72,10 +72,6 @@ export function draftsForDisplacements(p: PreparedHull, displacements: readonly 
   const issues: Issue[] = [];
   displacements.forEach((dis, k) => {
     const path = ['displacements', k];
-    if (!Number.isFinite(dis) || !(dis > 0)) {
-      issues.push(issue('HYD_LOAD_OUT_OF_RANGE', path, `displacement ${dis} t: a hull floats a displacement above zero`));
-      return;
-    }
     const light = tooLightIssue(p, dis, density, path);
     if (light !== undefined) issues.push(light);
     else if (dis > most) {

@@ -88,8 +88,16 @@ export function enclosedVolume(p: PreparedHull): number {
  */
 export const LEAST_VOLUME_SHARE = 1e-9;
 
-/** The issue (HYD_LOAD_OUT_OF_RANGE at `path`) of a displacement (t) lighter than the lightest load worked, LEAST_VOLUME_SHARE of the enclosed volume; undefined when it is not. */
+/**
+ * The issue (HYD_LOAD_OUT_OF_RANGE at `path`) of a displacement (t) no hull floats at a
+ * draft its offsets resolve: zero or less, or lighter than LEAST_VOLUME_SHARE of the
+ * enclosed volume; undefined for one above that. The one place of this rule for a single
+ * load (checkVolume) and for a list (core/stability/levelDrafts.ts).
+ */
 export function tooLightIssue(p: PreparedHull, displacement: number, density: number, path: readonly (string | number)[]): Issue | undefined {
+  if (!Number.isFinite(displacement) || !(displacement > 0)) {
+    return issue('HYD_LOAD_OUT_OF_RANGE', path, `displacement ${displacement} t: a hull floats a displacement above zero`);
+  }
   const least = LEAST_VOLUME_SHARE * enclosedVolume(p);
   if (!(displacement / density < least)) return undefined;
   return issue(
@@ -105,9 +113,6 @@ export function tooLightIssue(p: PreparedHull, displacement: number, density: nu
  * whole enclosed volume.
  */
 export function checkVolume(p: PreparedHull, displacement: number, density: number, path: readonly (string | number)[]): number {
-  if (!Number.isFinite(displacement) || !(displacement > 0)) {
-    fail('HYD_LOAD_OUT_OF_RANGE', path, `displacement ${displacement} t: a hull floats a displacement above zero`);
-  }
   const light = tooLightIssue(p, displacement, density, path);
   if (light !== undefined) throw new HalfbreadthError([light]);
   const most = enclosedVolume(p);

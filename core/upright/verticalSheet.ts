@@ -107,7 +107,6 @@ function addBasisIntegrals(z: readonly number[], a: number, b: number, out: numb
 
 const RULE: Record<number, CutPanel['rule']> = { 2: 'straight line', 3: 'parabola', 4: 'cubic' };
 
-
 /** Each panel rule as a checker names it. Common practice, no source. */
 const RULE_WORDS: Record<CutPanel['rule'], string> = {
   'straight line': 'panel of two ordinates, taken by the trapezoidal rule (the straight line between them)',
