@@ -40,6 +40,7 @@ import { CAUTION } from '../../core/common/caution.js';
 import { writeBoxBargeCsv } from '../fixtures/boxBargeCsv.js';
 import '../helpers/relClose.js';
 import { csvComments, csvTable, runCli } from '../helpers/runCli.js';
+import { boxWallSidedKn } from '../fixtures/wallSided.js';
 
 const L = 10;
 const B = 4;
@@ -55,11 +56,7 @@ const ABS = 1e-12;
 /** Draft of the box floating Δ, m (Archimedes). */
 const draftOf = (displacement: number): number => displacement / (RHO * L * B);
 /** KN by the wall-sided formula at draft T, m. */
-const knWallSided = (T: number, deg: number): number => {
-  const phi = deg * RAD;
-  const bm = (B * B) / (12 * T);
-  return Math.sin(phi) * (T / 2 + bm + 0.5 * bm * Math.tan(phi) ** 2);
-};
+const knWallSided = (T: number, deg: number): number => boxWallSidedKn(B, T, deg);
 
 /** The part of a polygon on the side f <= 0 of a line (Sutherland-Hodgman, one edge). */
 function clip(poly: readonly [number, number][], f: (p: [number, number]) => number): [number, number][] {

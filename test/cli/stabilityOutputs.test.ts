@@ -30,6 +30,7 @@ import { csvComments, runCli } from '../helpers/runCli.js';
 import type { Document } from '@xmldom/xmldom';
 import { all, attr, axisScale, hasVertex, parseSvg, pathVertices, textOf } from '../helpers/svgRead.js';
 import { writtenAll } from '../helpers/written.js';
+import { wallSidedGz } from '../fixtures/wallSided.js';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const BIN = fileURLToPath(new URL('../../bin/halfbreadth.js', import.meta.url));
@@ -52,7 +53,7 @@ const AT_T = RHO * L * B * T;
 const KG = 1.5;
 const BM = (B * B) / (12 * T);
 const GM = T / 2 + BM - KG;
-const wallSided = (deg: number): number => Math.sin(deg * RAD) * (GM + 0.5 * BM * Math.tan(deg * RAD) ** 2);
+const wallSided = (deg: number): number => wallSidedGz(GM, BM, deg);
 
 describe('gz on the demo survey launch', () => {
   test('answers with each criterion of the conventions and a verdict, and the figures of the core\'s rightingLevers', async () => {

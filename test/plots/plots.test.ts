@@ -38,6 +38,7 @@ import { boxBarge, parabolicHull, planWedge } from '../fixtures/hulls.js';
 import { all, attr, axisScale, hasVertex, num, parseSvg, pathVertices, textOf } from '../helpers/svgRead.js';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { wallSidedGz } from '../fixtures/wallSided.js';
 
 const L = 10;
 const B = 4;
@@ -213,10 +214,7 @@ describe('the cross curves', () => {
 describe('the GZ curve', () => {
   const GM = 0.6;
   const BM = 2.4;
-  const wallSided = (deg: number) => {
-    const phi = (deg * Math.PI) / 180;
-    return Math.sin(phi) * (GM + 0.5 * BM * Math.tan(phi) ** 2);
-  };
+  const wallSided = (deg: number) => wallSidedGz(GM, BM, deg);
   const points = Array.from({ length: 9 }, (_, k) => ({ heel: 5 * k, gz: wallSided(5 * k) }));
   const criteria: CriterionResult[] = [
     { id: 'gm0', required: 0.15, actual: GM, unit: 'm', pass: true },

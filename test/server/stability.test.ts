@@ -43,6 +43,7 @@ import { readOffsetsCsv } from '../../core/offsets/readOffsets.js';
 import { buildApp } from '../../server/app.js';
 import { csvHeaders, deckedBoxCsv, jsonHeaders } from '../fixtures/serverHelpers.js';
 import { expectFieldsRelClose } from '../helpers/relClose.js';
+import { boxMetacentre, boxWallSidedKn } from '../fixtures/wallSided.js';
 
 const L = 10;
 const B = 4;
@@ -58,13 +59,9 @@ const WRITTEN = 6e-12;
 const SOLVED = 1e-8;
 
 /** The box's KB, BM and KM at draft T. */
-const upright = (T: number) => ({ kb: T / 2, bm: (B * B) / (12 * T), km: T / 2 + (B * B) / (12 * T) });
+const upright = (T: number) => boxMetacentre(B, T);
 /** KN by the wall-sided formula. */
-const wallSidedKn = (T: number, deg: number): number => {
-  const { km, bm } = upright(T);
-  const t = Math.tan(deg * RAD);
-  return Math.sin(deg * RAD) * (km + (bm * t * t) / 2);
-};
+const wallSidedKn = (T: number, deg: number): number => boxWallSidedKn(B, T, deg);
 
 let app: FastifyInstance;
 let id: string;

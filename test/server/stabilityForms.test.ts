@@ -33,6 +33,7 @@ import { BAD_REQUESTS } from '../fixtures/badRequests.js';
 import { csvHeaders, deckedBoxCsv } from '../fixtures/serverHelpers.js';
 import { relClose } from '../helpers/relClose.js';
 import { all, attr, axisScale, hasVertex, parseSvg, pathVertices, textOf } from '../helpers/svgRead.js';
+import { boxMetacentre, wallSidedGz } from '../fixtures/wallSided.js';
 
 const FT = unit(1, 'ft').toNumber('m');
 const INCH_CM = unit(1, 'in').toNumber('cm');
@@ -98,10 +99,9 @@ const RHO = 1.025;
 const RAD = Math.PI / 180;
 const BOX = deckedBoxCsv('forms box', L, B, D);
 const at = (T: number): number => RHO * L * B * T;
-const wallSidedGz = (T: number, kg: number, deg: number): number => {
-  const bm = (B * B) / (12 * T);
-  const t = Math.tan(deg * RAD);
-  return Math.sin(deg * RAD) * (T / 2 + bm - kg + (bm * t * t) / 2);
+const boxGz = (T: number, kg: number, deg: number): number => {
+  const { km, bm } = boxMetacentre(B, T);
+  return wallSidedGz(km - kg, bm, deg);
 };
 const SURVEY_LAUNCH = readFileSync(new URL('../../offsets-demo/survey-launch.csv', import.meta.url), 'utf8');
 
@@ -207,7 +207,7 @@ describe('the stability plots', () => {
     const sy = axisScale(doc, 'y');
     const v = pathVertices(attr(all(doc, 'path').find((p) => attr(p, 'data-curve') === 'gz')!, 'd'));
     // Wall-sided until the deck edge immerses at tan phi = (D - T) / (B/2), 26.6 degrees.
-    for (const h of [5, 10, 15, 20, 25]) expect(hasVertex(v, sx(h), sy(wallSidedGz(T, kg, h))), `GZ at ${h} deg`).toBe(true);
+    for (const h of [5, 10, 15, 20, 25]) expect(hasVertex(v, sx(h), sy(boxGz(T, kg, h))), `GZ at ${h} deg`).toBe(true);
   });
 
   test('cross-curves.svg draws KN of the box at each displacement, one curve per heel, with the caution', async () => {
@@ -222,7 +222,7 @@ describe('the stability plots', () => {
     const sy = axisScale(doc, 'y');
     for (const h of [5, 10]) {
       const v = pathVertices(attr(all(doc, 'path').find((p) => attr(p, 'data-curve') === `heel ${h}`)!, 'd'));
-      for (const t of Ts) expect(hasVertex(v, sx(at(t)), sy(wallSidedGz(t, 0, h))), `KN at ${h} deg, ${at(t)} t`).toBe(true);
+      for (const t of Ts) expect(hasVertex(v, sx(at(t)), sy(boxGz(t, 0, h))), `KN at ${h} deg, ${at(t)} t`).toBe(true);
     }
   });
 
