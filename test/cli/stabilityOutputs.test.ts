@@ -69,18 +69,10 @@ describe('gz on the demo survey launch', () => {
       { displacement: 4.5, kg: 0.9, openings: [{ x: 5.2, y: 0.8, z: 1.2 }] },
       1.025,
     );
-    const { criteria, gm0, points, areas, maxGz, angleOfMaxGz, vanishingAngle, downfloodingAngle, criteriaSet } = writtenAll(core);
-    expect({ criteria: j.criteria, gm0: j['gm0'], points: j['points'], areas: j['areas'], maxGz: j['maxGz'], angleOfMaxGz: j['angleOfMaxGz'], vanishingAngle: j['vanishingAngle'], downfloodingAngle: j['downfloodingAngle'], criteriaSet: j['criteriaSet'] }).toEqual({
-      criteria,
-      gm0,
-      points,
-      areas,
-      maxGz,
-      angleOfMaxGz,
-      vanishingAngle,
-      downfloodingAngle,
-      criteriaSet,
-    });
+    const compared = ['criteria', 'gm0', 'points', 'areas', 'maxGz', 'angleOfMaxGz', 'vanishingAngle', 'downfloodingAngle', 'criteriaSet'] as const;
+    const written = writtenAll(core) as unknown as Record<string, unknown>;
+    const pick = (o: Record<string, unknown>) => Object.fromEntries(compared.map((k) => [k, o[k]]));
+    expect(pick(j)).toEqual(pick(written));
     // The opening reaches the water at some heel of the curve.
     expect(typeof j['downfloodingAngle']).toBe('number');
   });

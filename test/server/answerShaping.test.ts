@@ -35,6 +35,17 @@ afterAll(async () => {
 
 const get = (url: string, headers: Record<string, string> = {}) => app.inject({ method: 'GET', url, headers });
 
+/** The whole JSON answer of the box's hydrostatic table: the rows and fields asked for, in SI, with no notes. */
+const tableAnswer = (density: number, rows: Record<string, number>[], fields: { key: string; unit: string; label: string }[]) => ({
+  hull: { name: 'test box', stations: 11, waterlines: 5, ap: 0, fp: 10, lbp: 10 },
+  density,
+  caution: CAUTION,
+  rows,
+  notes: [],
+  units: 'si',
+  fields,
+});
+
 describe('fields choose and order the columns', () => {
   test('a CSV of two columns, whole: the caution and what the table is of, the header, the rows', async () => {
     const res = await get('/v1/hulls/test-box/hydrostatics?drafts=1,1.5&fields=displacement,wettedSurface&format=csv');
@@ -48,18 +59,12 @@ describe('fields choose and order the columns', () => {
 
   test('in another order, and in JSON the rows hold those keys alone, with units and fields said', async () => {
     const res = await get('/v1/hulls/test-box/hydrostatics?drafts=1&fields=wettedSurface,draft');
-    expect(JSON.parse(res.body)).toEqual({
-      hull: { name: 'test box', stations: 11, waterlines: 5, ap: 0, fp: 10, lbp: 10 },
-      density: 1.025,
-      caution: CAUTION,
-      rows: [{ wettedSurface: 68, draft: 1 }],
-      notes: [],
-      units: 'si',
-      fields: [
+    expect(JSON.parse(res.body)).toEqual(
+      tableAnswer(1.025, [{ wettedSurface: 68, draft: 1 }], [
         { key: 'wettedSurface', unit: 'm2', label: 'WSA' },
         { key: 'draft', unit: 'm', label: 'Draft' },
-      ],
-    });
+      ]),
+    );
   });
 
   test('a column the answer has not is a 400 naming the ones it has, before anything is computed', async () => {
@@ -96,18 +101,12 @@ describe('digits', () => {
   test('3 significant digits, whole JSON body', async () => {
     // rho L B T = 1.03 x 40 x 1.1 = 45.32 t, to 3 digits 45.3; TPC = 1.03 x 40 / 100 = 0.412.
     const res = await get('/v1/hulls/test-box/hydrostatics?drafts=1.1&density=1.03&fields=displacement,tpc&digits=3');
-    expect(JSON.parse(res.body)).toEqual({
-      hull: { name: 'test box', stations: 11, waterlines: 5, ap: 0, fp: 10, lbp: 10 },
-      density: 1.03,
-      caution: CAUTION,
-      rows: [{ displacement: 45.3, tpc: 0.412 }],
-      notes: [],
-      units: 'si',
-      fields: [
+    expect(JSON.parse(res.body)).toEqual(
+      tableAnswer(1.03, [{ displacement: 45.3, tpc: 0.412 }], [
         { key: 'displacement', unit: 't', label: 'Displ.' },
         { key: 'tpc', unit: 't/cm', label: 'TPC' },
-      ],
-    });
+      ]),
+    );
   });
 
   test('the default writes no binary noise, and 17 digits give the double', async () => {

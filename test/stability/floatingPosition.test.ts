@@ -40,13 +40,14 @@ function codeOf(f: () => unknown): string {
   return 'no error';
 }
 
-describe('a box barge with its centre of gravity off its centre of buoyancy', () => {
-  const L = 20;
-  const B = 6;
-  const T = 1.3;
-  const p = prepareHull(boxBarge(L, B, 4, 11, 5));
-  const displacement = rho * L * B * T;
+/** The box barge of the groups below, 20 m x 6 m x 4 m (11 stations, 5 waterlines), loaded to float level at 1.3 m. */
+const L = 20;
+const B = 6;
+const T = 1.3;
+const p = prepareHull(boxBarge(L, B, 4, 11, 5));
+const displacement = rho * L * B * T;
 
+describe('a box barge with its centre of gravity off its centre of buoyancy', () => {
   test('trims by the trapezium: any trim that keeps the keel under water, without a KG', () => {
     for (const lcg of [9.9, 9.5, 8.8, 11.2]) {
       const fp = floatingPosition(p, { displacement, lcg }, rho);
@@ -77,11 +78,6 @@ describe('the stability of the balance: GM there, the slope of GZ', () => {
   // by a TCG within the wall-sided range, GZ(φ) = sin φ (GM + ½ BM tan² φ) - TCG cos φ
   // (the wall-sided formula: C. B. Barrass & D. R. Derrett, Ship Stability for Masters and
   // Mates, 7th ed., 2012, from memory), whose slope at the balance is GM there.
-  const L = 20;
-  const B = 6;
-  const T = 1.3;
-  const p = prepareHull(boxBarge(L, B, 4, 11, 5));
-  const displacement = rho * L * B * T;
   const BM = (B * B) / (12 * T);
 
   test('upright, GM is KB + BM - KG, and the balance is stable only while it is above zero', () => {
@@ -208,10 +204,6 @@ describe('a load with no balance within the hull is refused, never answered', ()
   // the deck, the immersed side is a trapezium or a triangle, whose centroid lies at least
   // L/3 from an end (elementary geometry): an LCG nearer an end than that, or beyond it,
   // has no floating position a table of offsets can give.
-  const L = 20;
-  const p = prepareHull(boxBarge(L, 6, 4, 11, 5));
-  const displacement = rho * L * 6 * 1.3;
-
   test.each([
     ['G aft of the hull', { displacement, lcg: -5 }, 'lcg'],
     ['G at the aft end', { displacement, lcg: 0 }, 'lcg'],
@@ -231,7 +223,6 @@ describe('a load with no balance within the hull is refused, never answered', ()
 
   test('an LCG just inside the reach of the trapezium still floats, and balances', () => {
     // LCB of the trapezium with dF = 0.1 m: L (dA + 2 dF) / (3 (dA + dF)), dA = 2T - dF.
-    const T = 1.3;
     const dF = 0.1;
     const dA = 2 * T - dF;
     const lcg = (L * (dA + 2 * dF)) / (3 * (dA + dF));
